@@ -1,0 +1,113 @@
+package spoolwork.model;
+
+import java.util.Collections;
+import java.util.LinkedHashMap;
+import java.util.Map;
+import java.util.Objects;
+import java.util.TreeMap;
+
+/**
+ * A placed component.
+ *
+ * @param id            stable identity used by lines and states (never shown, never changes)
+ * @param tag           the user's label, unique in a circuit, e.g. "P1"
+ * @param x             position of the symbol origin on the sheet, grid units
+ * @param y             position of the symbol origin on the sheet, grid units (down is positive)
+ * @param rotation      clockwise rotation in degrees: 0, 90, 180 or 270
+ * @param mirrored      mirrored about the symbol's vertical axis before rotation
+ * @param params        numeric parameters by key, SI; every key the type declares is present
+ * @param options       option choices by key; every key the type declares is present
+ * @param ratedPressure maximum rated pressure, Pa, or {@code null} when not given
+ */
+public record Component(String id, String tag, ComponentType type, double x, double y, int rotation,
+                        boolean mirrored, Map<String, Double> params, Map<String, String> options,
+                        Double ratedPressure) {
+    public Component {
+        Objects.requireNonNull(id);
+        Objects.requireNonNull(tag);
+        Objects.requireNonNull(type);
+        if (rotation % 90 != 0) {
+            throw new IllegalArgumentException("rotation must be a multiple of 90°: " + rotation);
+        }
+        rotation = ((rotation % 360) + 360) % 360;
+        Map<String, Double> p = new LinkedHashMap<>();
+        for (String k : type.params().keySet()) {
+            Double v = params.get(k);
+            p.put(k, v != null ? v : type.params().get(k).defaultValue());
+        }
+        for (String k : new TreeMap<>(params).keySet()) {
+            if (!p.containsKey(k)) {
+                throw new IllegalArgumentException(type.key() + " has no parameter " + k);
+            }
+        }
+        Map<String, String> o = new LinkedHashMap<>();
+        for (String k : type.options().keySet()) {
+            String v = options.get(k);
+            o.put(k, v != null ? v : type.options().get(k).defaultChoice());
+        }
+        for (String k : new TreeMap<>(options).keySet()) {
+            if (!o.containsKey(k)) {
+                throw new IllegalArgumentException(type.key() + " has no option " + k);
+            }
+        }
+        params = Collections.unmodifiableMap(p);
+        options = Collections.unmodifiableMap(o);
+    }
+
+    /** A new component with default parameters and options. */
+    public static Component of(String id, String tag, ComponentType type, double x, double y) {
+        return new Component(id, tag, type, x, y, 0, false, Map.of(), Map.of(), null);
+    }
+
+    public double param(String key) {
+        Double v = params.get(key);
+        if (v == null) {
+            throw new IllegalArgumentException(type.key() + " has no parameter " + key);
+        }
+        return v;
+    }
+
+    public String option(String key) {
+        String v = options.get(key);
+        if (v == null) {
+            throw new IllegalArgumentException(type.key() + " has no option " + key);
+        }
+        return v;
+    }
+
+    public Component withParam(String key, double value) {
+        Map<String, Double> p = new LinkedHashMap<>(params);
+        p.put(key, value);
+        return new Component(id, tag, type, x, y, rotation, mirrored, p, options, ratedPressure);
+    }
+
+    public Component withOption(String key, String value) {
+        Map<String, String> o = new LinkedHashMap<>(options);
+        o.put(key, value);
+        return new Component(id, tag, type, x, y, rotation, mirrored, params, o, ratedPressure);
+    }
+
+    public Component withTag(String newTag) {
+        return new Component(id, newTag, type, x, y, rotation, mirrored, params, options, ratedPressure);
+    }
+
+    public Component at(double nx, double ny) {
+        return new Component(id, tag, type, nx, ny, rotation, mirrored, params, options, ratedPressure);
+    }
+
+    public Component withRotation(int r) {
+        return new Component(id, tag, type, x, y, r, mirrored, params, options, ratedPressure);
+    }
+
+    public Component withMirrored(boolean m) {
+        return new Component(id, tag, type, x, y, rotation, m, params, options, ratedPressure);
+    }
+
+    public Component withRatedPressure(Double p) {
+        return new Component(id, tag, type, x, y, rotation, mirrored, params, options, p);
+    }
+
+    public Component withId(String newId) {
+        return new Component(newId, tag, type, x, y, rotation, mirrored, params, options, ratedPressure);
+    }
+}
