@@ -157,24 +157,24 @@ public final class Edits {
      * quick route instead of a clear one (the live preview of a drag).
      */
     public Circuit moved(Circuit c, Set<String> ids, double dx, double dy, boolean routeCarefully) {
-        Circuit out = c;
+        Draft d = new Draft(c);
         Set<String> owners = new HashSet<>();
         for (String id : ids) {
-            var comp = out.component(id);
-            if (comp.isPresent()) {
-                out = out.withComponent(comp.get().at(comp.get().x() + dx, comp.get().y() + dy));
+            Component comp = d.components.get(id);
+            if (comp != null) {
+                d.components.put(id, comp.at(comp.x() + dx, comp.y() + dy));
                 owners.add(id);
                 continue;
             }
-            var j = out.junction(id);
-            if (j.isPresent()) {
-                out = out.withJunction(j.get().at(j.get().x() + dx, j.get().y() + dy));
+            Junction j = d.junctions.get(id);
+            if (j != null) {
+                d.junctions.put(id, j.at(j.x() + dx, j.y() + dy));
                 owners.add(id);
                 continue;
             }
-            var n = out.note(id);
-            if (n.isPresent()) {
-                out = out.withNote(n.get().at(n.get().x() + dx, n.get().y() + dy));
+            Note n = d.notes.get(id);
+            if (n != null) {
+                d.notes.put(id, n.at(n.x() + dx, n.y() + dy));
             }
         }
         List<Line> rerouted = new ArrayList<>();
@@ -184,15 +184,20 @@ public final class Edits {
             if (a && b) {
                 List<Point> bends = new ArrayList<>();
                 l.bends().forEach(p -> bends.add(new Point(p.x() + dx, p.y() + dy)));
-                out = out.withLine(l.withBends(bends));
+                d.lines.put(l.id(), l.withBends(bends));
             } else if (a || b) {
                 rerouted.add(l);
             }
         }
-        for (Line l : rerouted) {
-            out = out.withLine(l.withBends(routeCarefully ? route(out, l, Set.of()) : quickRoute(out, l)));
+        Circuit out = d.build();
+        if (rerouted.isEmpty()) {
+            return out;
         }
-        return out;
+        Draft r = new Draft(out);
+        for (Line l : rerouted) {
+            r.lines.put(l.id(), l.withBends(routeCarefully ? route(out, l, Set.of()) : quickRoute(out, l)));
+        }
+        return r.build();
     }
 
     /** Turns each selected component a quarter turn clockwise about its own origin. */
@@ -208,27 +213,29 @@ public final class Edits {
     }
 
     private Circuit transformed(Circuit c, Set<String> ids, java.util.function.UnaryOperator<Component> f) {
-        Circuit out = c;
+        Draft d = new Draft(c);
         Set<String> changed = new HashSet<>();
         for (String id : ids) {
-            var comp = out.component(id);
-            if (comp.isPresent()) {
-                out = out.withComponent(f.apply(comp.get()));
+            Component comp = d.components.get(id);
+            if (comp != null) {
+                d.components.put(id, f.apply(comp));
                 changed.add(id);
             }
         }
-        return rerouteAt(out, changed);
+        return rerouteAt(d.build(), changed);
     }
 
     /** Routes every line with an end on one of the owners again. */
     public Circuit rerouteAt(Circuit c, Set<String> owners) {
-        Circuit out = c;
+        Draft d = new Draft(c);
+        boolean any = false;
         for (Line l : c.lines()) {
             if (owners.contains(l.from().ownerId()) || owners.contains(l.to().ownerId())) {
-                out = out.withLine(l.withBends(route(out, l, Set.of())));
+                d.lines.put(l.id(), l.withBends(route(c, l, Set.of())));
+                any = true;
             }
         }
-        return out;
+        return any ? d.build() : c;
     }
 
     /** Routes the given line again, dropping its bends. */
@@ -406,31 +413,43 @@ public final class Edits {
         holder[0] = new Paste(new Command(description, c -> {
             holder[0].newIds.clear();
             Map<String, String> ids = new HashMap<>();
-            Circuit out = c;
+            Draft d = new Draft(c);
+            Set<String> tags = new HashSet<>();
+            d.components.values().forEach(k -> tags.add(k.tag()));
             for (Component k : fragment.components()) {
-                String id = out.freshId("c");
-                String tag = out.componentByTag(k.tag()).isPresent() ? out.freshTag(k.type()) : k.tag();
-                out = out.withComponent(k.withId(id).withTag(tag).at(k.x() + dx, k.y() + dy));
+                String id = d.freshId("c");
+                String tag = k.tag();
+                if (tags.contains(tag)) {
+                    for (int i = 1; ; i++) {
+                        tag = k.type().tagPrefix() + i;
+                        if (!tags.contains(tag)) {
+                            break;
+                        }
+                    }
+                }
+                tags.add(tag);
+                d.components.put(id, k.withId(id).withTag(tag).at(k.x() + dx, k.y() + dy));
                 ids.put(k.id(), id);
             }
             for (Junction j : fragment.junctions()) {
-                String id = out.freshId("j");
-                out = out.withJunction(new Junction(id, j.x() + dx, j.y() + dy));
+                String id = d.freshId("j");
+                d.junctions.put(id, new Junction(id, j.x() + dx, j.y() + dy));
                 ids.put(j.id(), id);
             }
             for (Note n : fragment.notes()) {
-                String id = out.freshId("n");
-                out = out.withNote(new Note(id, n.x() + dx, n.y() + dy, n.text()));
+                String id = d.freshId("n");
+                d.notes.put(id, new Note(id, n.x() + dx, n.y() + dy, n.text()));
                 ids.put(n.id(), id);
             }
             for (Line l : fragment.lines()) {
-                String id = out.freshId("l");
+                String id = d.freshId("l");
                 List<Point> bends = new ArrayList<>();
                 l.bends().forEach(p -> bends.add(new Point(p.x() + dx, p.y() + dy)));
-                out = out.withLine(new Line(id, remap(l.from(), ids), remap(l.to(), ids), bends, l.diameter(),
+                d.lines.put(id, new Line(id, remap(l.from(), ids), remap(l.to(), ids), bends, l.diameter(),
                         l.length(), l.kind(), l.ideal()));
                 ids.put(l.id(), id);
             }
+            Circuit out = d.build();
             holder[0].newIds.addAll(ids.values());
             return out;
         }));
