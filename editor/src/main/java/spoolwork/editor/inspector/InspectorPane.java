@@ -398,6 +398,7 @@ public final class InspectorPane extends VBox {
         Label count = new Label(c.components().size() + " components, " + c.lines().size() + " lines, "
                 + c.junctions().size() + " junctions, " + c.notes().size() + " notes");
         count.getStyleClass().add("inspector-sub");
+        count.setWrapText(true);
         body.getChildren().add(count);
     }
 }

@@ -93,6 +93,11 @@ public final class MessagesPane extends BorderPane {
                     open.add(p.name());
                 }
             }
+            // Each reservoir symbol on a drawing is the same tank drawn where a line needs it, so one
+            // connected port is enough.
+            if (k.type() == spoolwork.model.ComponentType.RESERVOIR && open.size() < k.type().ports().size()) {
+                continue;
+            }
             if (!open.isEmpty()) {
                 out.add(new Message(Level.CHECK, k.tag(), (open.size() == 1 ? "port " : "ports ")
                         + String.join(", ", open) + " not connected"));

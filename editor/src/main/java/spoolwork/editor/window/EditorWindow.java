@@ -95,7 +95,7 @@ public final class EditorWindow {
         palette = new PalettePane(art, sheet);
         files = new FileActions(doc, settings, dialogs, () -> stage,
                 m -> messages.notice(m.startsWith("Could not") ? MessagesPane.Level.ERROR : MessagesPane.Level.NOTE, "", m),
-                () -> Platform.runLater(sheet::fit));
+                () -> Platform.runLater(sheet::fitSheet));
 
         root.getStyleClass().add("editor-root");
         VBox top = new VBox(menuBar(), toolBar());
@@ -104,12 +104,12 @@ public final class EditorWindow {
         centre.setOrientation(Orientation.VERTICAL);
         centre.setDividerPositions(0.82);
         SplitPane.setResizableWithParent(messages, false);
-        palette.setPrefWidth(240);
+        palette.setPrefWidth(270);
         palette.setMinWidth(180);
         inspector.setPrefWidth(300);
         inspector.setMinWidth(220);
         SplitPane main = new SplitPane(palette, centre, inspector);
-        main.setDividerPositions(0.16, 0.80);
+        main.setDividerPositions(0.19, 0.79);
         SplitPane.setResizableWithParent(palette, false);
         SplitPane.setResizableWithParent(inspector, false);
         root.setCenter(main);
@@ -478,9 +478,13 @@ public final class EditorWindow {
         for (String a : args) {
             if (!a.startsWith("-")) {
                 files.load(Path.of(a));
+                Platform.runLater(sheet::requestFocus);
                 return;
             }
         }
-        Platform.runLater(sheet::fitSheet);
+        Platform.runLater(() -> {
+            sheet.fitSheet();
+            sheet.requestFocus();
+        });
     }
 }
