@@ -549,7 +549,27 @@ public final class Edits {
                 obstacles.add(geometry.bounds(k));
             }
         }
-        return Router.route(end(c, l.from()), end(c, l.to()), obstacles);
+        List<List<Point>> others = new ArrayList<>();
+        Box window = Box.around(position(c, l.from()).x(), position(c, l.from()).y(),
+                position(c, l.to()).x(), position(c, l.to()).y()).grow(12);
+        for (Line o : c.lines()) {
+            if (!o.id().equals(l.id())) {
+                List<Point> pts = polyline(c, o);
+                if (pts.stream().anyMatch(p -> window.contains(p.x(), p.y())) || crosses(pts, window)) {
+                    others.add(pts);
+                }
+            }
+        }
+        return Router.route(end(c, l.from()), end(c, l.to()), obstacles, others);
+    }
+
+    private static boolean crosses(List<Point> pts, Box b) {
+        for (int i = 0; i + 1 < pts.size(); i++) {
+            if (Box.around(pts.get(i).x(), pts.get(i).y(), pts.get(i + 1).x(), pts.get(i + 1).y()).intersects(b)) {
+                return true;
+            }
+        }
+        return false;
     }
 
     public List<Point> quickRoute(Circuit c, Line l) {

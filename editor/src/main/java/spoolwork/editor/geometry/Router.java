@@ -16,6 +16,8 @@ import spoolwork.model.Point;
 public final class Router {
     /** Cost of one bend, in grid units of length: a bend is worth this much extra run. */
     static final double BEND_COST = 4;
+    /** Extra cost per grid step of running along another line. */
+    static final int OVERLAP_COST = 6;
     private static final int MARGIN = 6;
     private static final int MAX_CELLS = 90_000;
 
@@ -34,6 +36,15 @@ public final class Router {
      * falls back to {@link #quick} when no clear route exists within the search window.
      */
     public static List<Point> route(End from, End to, List<Box> obstacles) {
+        return route(from, to, obstacles, List.of());
+    }
+
+    /**
+     * As {@link #route(End, End, List)}, and keeping off the runs of other lines where it can: running along
+     * another line costs {@link #OVERLAP_COST} per grid step, so lines share a run only when there is no
+     * other way, and a crossing costs nothing extra.
+     */
+    public static List<Point> route(End from, End to, List<Box> obstacles, List<List<Point>> others) {
         Point a = snap(from.stub());
         Point b = snap(to.stub());
         int ox = (int) Math.min(a.x(), b.x()) - MARGIN;
@@ -60,7 +71,14 @@ public final class Router {
         int ib = index(b, ox, oy, w);
         blocked[ia] = false;
         blocked[ib] = false;
-        int[] cells = search(blocked, w, h, ia, ib, from.exit(), to.exit());
+        boolean[] alongX = new boolean[w * h];
+        boolean[] alongY = new boolean[w * h];
+        for (List<Point> line : others) {
+            for (int i = 0; i + 1 < line.size(); i++) {
+                mark(line.get(i), line.get(i + 1), ox, oy, w, h, alongX, alongY);
+            }
+        }
+        int[] cells = search(blocked, alongX, alongY, w, h, ia, ib, from.exit(), to.exit());
         if (cells == null) {
             return quick(from, to);
         }
@@ -164,7 +182,29 @@ public final class Router {
      * A* over (grid point, travel axis) states: a step along the axis costs 1, a change of axis
      * {@link #BEND_COST}. Returns the cells of the cheapest path from a to b, or null when b cannot be reached.
      */
-    private static int[] search(boolean[] blocked, int w, int h, int a, int b, Point exitA, Point exitB) {
+    private static void mark(Point p, Point q, int ox, int oy, int w, int h, boolean[] alongX, boolean[] alongY) {
+        boolean horizontal = Math.abs(p.y() - q.y()) < 1e-9;
+        boolean vertical = Math.abs(p.x() - q.x()) < 1e-9;
+        if (!horizontal && !vertical) {
+            return;
+        }
+        int x0 = (int) Math.round(Math.min(p.x(), q.x())) - ox;
+        int x1 = (int) Math.round(Math.max(p.x(), q.x())) - ox;
+        int y0 = (int) Math.round(Math.min(p.y(), q.y())) - oy;
+        int y1 = (int) Math.round(Math.max(p.y(), q.y())) - oy;
+        for (int x = Math.max(0, x0); x <= Math.min(w - 1, x1); x++) {
+            for (int y = Math.max(0, y0); y <= Math.min(h - 1, y1); y++) {
+                if (horizontal) {
+                    alongX[y * w + x] = true;
+                } else {
+                    alongY[y * w + x] = true;
+                }
+            }
+        }
+    }
+
+    private static int[] search(boolean[] blocked, boolean[] alongX, boolean[] alongY, int w, int h, int a, int b,
+                                Point exitA, Point exitB) {
         int n = w * h * 2;
         int[] g = new int[n];
         int[] parent = new int[n];
@@ -206,17 +246,17 @@ public final class Router {
             int y = cell / w;
             if (d == 0) {
                 if (x > 0 && !blocked[cell - 1]) {
-                    relax(open, g, parent, s, 2 * (cell - 1), cost + 1, bx, by, w);
+                    relax(open, g, parent, s, 2 * (cell - 1), cost + step(alongX, cell, cell - 1), bx, by, w);
                 }
                 if (x + 1 < w && !blocked[cell + 1]) {
-                    relax(open, g, parent, s, 2 * (cell + 1), cost + 1, bx, by, w);
+                    relax(open, g, parent, s, 2 * (cell + 1), cost + step(alongX, cell, cell + 1), bx, by, w);
                 }
             } else {
                 if (y > 0 && !blocked[cell - w]) {
-                    relax(open, g, parent, s, 2 * (cell - w) + 1, cost + 1, bx, by, w);
+                    relax(open, g, parent, s, 2 * (cell - w) + 1, cost + step(alongY, cell, cell - w), bx, by, w);
                 }
                 if (y + 1 < h && !blocked[cell + w]) {
-                    relax(open, g, parent, s, 2 * (cell + w) + 1, cost + 1, bx, by, w);
+                    relax(open, g, parent, s, 2 * (cell + w) + 1, cost + step(alongY, cell, cell + w), bx, by, w);
                 }
             }
         }
@@ -232,6 +272,11 @@ public final class Router {
         }
         java.util.Collections.reverse(out);
         return out.stream().mapToInt(Integer::intValue).toArray();
+    }
+
+    /** One grid step, dearer when both cells lie on a run of another line along the same axis. */
+    private static int step(boolean[] along, int from, int to) {
+        return along[from] && along[to] ? 1 + OVERLAP_COST : 1;
     }
 
     private static void relax(java.util.PriorityQueue<long[]> open, int[] g, int[] parent, int from, int to, int cost,
