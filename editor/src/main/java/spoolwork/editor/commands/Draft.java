@@ -19,9 +19,11 @@ final class Draft {
     final Map<String, Junction> junctions = new LinkedHashMap<>();
     final Map<String, Line> lines = new LinkedHashMap<>();
     final Map<String, Note> notes = new LinkedHashMap<>();
+    java.util.List<spoolwork.model.OperatingState> states;
 
     Draft(Circuit c) {
         base = c;
+        states = c.states();
         c.components().forEach(k -> components.put(k.id(), k));
         c.junctions().forEach(j -> junctions.put(j.id(), j));
         c.lines().forEach(l -> lines.put(l.id(), l));
@@ -44,6 +46,6 @@ final class Draft {
     /** The checked circuit; throws the model's exception when a rule is broken. */
     Circuit build() {
         return new Circuit(base.title(), base.fluid(), components.values(), junctions.values(), lines.values(),
-                notes.values(), base.states());
+                notes.values(), states);
     }
 }

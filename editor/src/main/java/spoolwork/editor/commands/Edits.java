@@ -296,19 +296,27 @@ public final class Edits {
     public Command delete(Collection<String> ids) {
         Set<String> set = new LinkedHashSet<>(ids);
         return new Command("Delete " + count(set), c -> {
-            Circuit out = c;
+            Draft d = new Draft(c);
+            Set<String> gone = new HashSet<>();
             for (String id : set) {
-                if (out.component(id).isPresent()) {
-                    out = out.withoutComponent(id);
-                } else if (out.junction(id).isPresent()) {
-                    out = out.withoutJunction(id);
-                } else if (out.line(id).isPresent()) {
-                    out = out.withoutLine(id);
-                } else if (out.note(id).isPresent()) {
-                    out = out.withoutNote(id);
+                if (d.components.remove(id) != null || d.junctions.remove(id) != null) {
+                    gone.add(id);
+                } else if (d.lines.remove(id) == null) {
+                    d.notes.remove(id);
                 }
             }
-            return tidyJunctions(out);
+            d.lines.values().removeIf(l -> gone.contains(l.from().ownerId()) || gone.contains(l.to().ownerId()));
+            // Operating states must not name what is gone.
+            List<spoolwork.model.OperatingState> states = new ArrayList<>();
+            for (spoolwork.model.OperatingState s : c.states()) {
+                spoolwork.model.OperatingState t = s;
+                for (String id : gone) {
+                    t = t.without(id);
+                }
+                states.add(t);
+            }
+            d.states = states;
+            return tidyJunctions(d.build());
         });
     }
 

@@ -168,6 +168,15 @@ public final class InspectorPane extends VBox {
                 tag.getStyleClass().add("invalid");
             }
         });
+        tag.setOnKeyPressed(e -> {
+            if (e.getCode() == javafx.scene.input.KeyCode.ESCAPE) {
+                tag.setText(k.tag());
+                tagError.setVisible(false);
+                tagError.setManaged(false);
+                tag.getStyleClass().remove("invalid");
+                e.consume();
+            }
+        });
         tag.focusedProperty().addListener((o, was, now) -> {
             if (!now && tag.getScene() != null) {
                 tag.getOnAction().handle(null);

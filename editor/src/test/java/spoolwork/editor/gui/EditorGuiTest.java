@@ -343,4 +343,69 @@ class EditorGuiTest {
         robot.press(KeyCode.CONTROL).type(KeyCode.Z).release(KeyCode.CONTROL);
         assertEquals(big, circuit());
     }
+
+    @Test
+    void tagsNotesLinesAndTheViewAreEditedInPlace(FxRobot robot) {
+        String valve = placeWithPalette(robot, "4/3", ComponentType.DIRECTIONAL_4_3, 30, 30);
+        String cyl = placeWithPalette(robot, "double-acting", ComponentType.DOUBLE_ACTING_CYLINDER, 30, 14);
+        // Renaming: a used tag is refused with an inline error; a free one is taken.
+        TextField tag = robot.lookup("#field-tag").queryAs(TextField.class);
+        typeInto(tag, "V1");
+        assertEquals("C1", circuit().component(cyl).orElseThrow().tag());
+        typeInto(tag, "C12");
+        assertEquals("C12", circuit().component(cyl).orElseThrow().tag());
+        // Keys typed into a field belong to the field: R does not rotate the selection.
+        TextField tag2 = robot.lookup("#field-tag").queryAs(TextField.class);
+        robot.clickOn(tag2).type(KeyCode.END).type(KeyCode.R);
+        assertEquals(0, circuit().component(cyl).orElseThrow().rotation());
+        assertEquals("C12r", tag2.getText());
+        robot.type(KeyCode.ESCAPE);
+        assertEquals("C12", tag2.getText(), "Escape puts the tag back");
+
+        drag(robot, port(valve, "A"), port(cyl, "A"));
+        String line = circuit().lines().iterator().next().id();
+        Point mid = window.edits().polyline(circuit(), circuit().line(line).orElseThrow()).get(0);
+        Point next = window.edits().polyline(circuit(), circuit().line(line).orElseThrow()).get(1);
+        click((mid.x() + next.x()) / 2, (mid.y() + next.y()) / 2);
+        assertEquals(List.of(line), window.selection().ordered());
+        TextField dia = robot.lookup("#line-diameter").queryAs(TextField.class);
+        typeInto(dia, "0.75 in");
+        // 1 in = 25.4 mm exactly (NIST SP 811, Appendix B).
+        assertEquals(0.75 * 0.0254, circuit().line(line).orElseThrow().diameter(), 1e-12);
+
+        // A note goes where the sheet is clicked and its text is edited in the inspector.
+        click(80, 60);
+        robot.type(KeyCode.N);
+        click(60, 20);
+        assertEquals(1, circuit().notes().size());
+        javafx.scene.control.TextArea text = robot.lookup("#note-text").queryAs(javafx.scene.control.TextArea.class);
+        robot.clickOn(text);
+        robot.interact(text::selectAll);
+        robot.write("Clamp: extend on a").press(KeyCode.CONTROL).type(KeyCode.ENTER).release(KeyCode.CONTROL);
+        assertEquals("Clamp: extend on a", circuit().notes().iterator().next().text());
+
+        // Title block fields with nothing selected.
+        robot.interact(() -> window.selection().clear());
+        TextField title = robot.lookup("#title-0").queryAs(TextField.class);
+        typeInto(title, "Clamp unit");
+        assertEquals("Clamp unit", circuit().title().title());
+
+        // The wheel zooms about the pointer; Ctrl+0 fits.
+        double z = window.sheet().zoomProperty().get();
+        jump(screen(30, 30));
+        robot.scroll(3, javafx.geometry.VerticalDirection.UP);
+        assertTrue(window.sheet().zoomProperty().get() != z, "wheel changes the zoom");
+        robot.press(KeyCode.CONTROL).type(KeyCode.DIGIT0).release(KeyCode.CONTROL);
+        double fitted = window.sheet().zoomProperty().get();
+        assertTrue(fitted > z, "fitting a small drawing zooms in: " + fitted);
+        // Middle-drag pans: the sheet point under the pointer moves with it.
+        Point2D at = screen(30, 30);
+        jump(at);
+        robot.press(MouseButton.MIDDLE);
+        jump(at.add(60, 40));
+        robot.release(MouseButton.MIDDLE);
+        Point2D moved = screen(30, 30);
+        assertEquals(at.getX() + 60, moved.getX(), 1.5);
+        assertEquals(at.getY() + 40, moved.getY(), 1.5);
+    }
 }
