@@ -28,7 +28,7 @@ final class RotatingSymbols {
     static Draw compensatedPump() {
         Draw d = body();
         outTriangle(d);
-        d.variable(0, 0, 2.3);
+        d.variable(0, 0, 1.9);
         d.port("P", 0, -R, 0, -3, Direction.UP);
         d.port("S", 0, R, 0, 3, Direction.DOWN);
         // Compensator on the right: outlet pressure through a pilot line against an adjustable spring.
@@ -64,7 +64,6 @@ final class RotatingSymbols {
             // A combustion engine: a box carrying the M, to tell it apart from the electric motor's circle.
             d.rect(-2, -2, 2, 2);
             d.text(0, 0, "M", 1.6);
-            d.line(-1.4, 1.4, 1.4, 1.4);
         } else {
             d.circle(0, 0, R);
             d.text(0, 0, "M", 1.6);
