@@ -33,7 +33,7 @@ public final class SymbolsCommand implements Callable<Integer> {
             return 2;
         }
         // Write beside the target and move into place, so a failed write never leaves half a file.
-        Path tmp = Files.createTempFile(dir, ".symbols", ".svg.tmp");
+        Path tmp = target.resolveSibling("." + target.getFileName() + ".part");
         try {
             Files.writeString(tmp, SymbolSheet.svg(), StandardCharsets.UTF_8);
             Files.move(tmp, target, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
