@@ -189,6 +189,14 @@ class SymbolLibraryTest {
     }
 
     @Test
+    void anchorNearSnapsToTheClosestPortWithinTolerance() {
+        Symbol s = SymbolLibrary.symbolFor(ComponentType.DIRECTIONAL_4_3, Map.of(), null);
+        assertEquals("T", s.anchorNear(new Point(1.3, 2.8), 0.5).orElseThrow().port());
+        assertEquals("P", s.anchorNear(new Point(-0.8, 3.1), 0.5).orElseThrow().port());
+        assertTrue(s.anchorNear(new Point(0, 3), 0.5).isEmpty(), "half way between P and T is one unit from each");
+    }
+
+    @Test
     void badOptionsAndPositionsAreRefusedByName() {
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
                 () -> SymbolLibrary.symbolFor(ComponentType.DIRECTIONAL_4_3, Map.of("centre", "semi"), null));
