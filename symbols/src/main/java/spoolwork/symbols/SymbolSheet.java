@@ -37,8 +37,26 @@ public final class SymbolSheet {
                 }
             }
         }
+        items.addAll(transformExamples());
         items.addAll(lineLegend());
         return layout(items);
+    }
+
+    /** One pump and one valve turned and mirrored, to check that text stays upright and letters follow the ports. */
+    private static List<Item> transformExamples() {
+        List<Item> out = new ArrayList<>();
+        for (ComponentType t : List.of(ComponentType.COMPENSATED_PUMP, ComponentType.DIRECTIONAL_4_3)) {
+            Symbol base = SymbolLibrary.symbolFor(t, Map.of(), null);
+            for (boolean m : new boolean[] {false, true}) {
+                for (int r = m ? 0 : 90; r < 360; r += m ? 180 : 90) {
+                    Symbol s = base.transformed(new Transform(r, m, 0, 0));
+                    String tag = "rotated " + r + "°" + (m ? ", mirrored" : "");
+                    out.add(new Item(new Symbol(s.key() + "/" + r + (m ? "m" : ""), s.shapes(), s.anchors(), s.bounds(),
+                            s.hitAreas()), t.label() + ", " + tag, null));
+                }
+            }
+        }
+        return out;
     }
 
     /** The line conventions: the kinds of line, a joined tee with its dot, and a crossing without one. */
@@ -79,6 +97,9 @@ public final class SymbolSheet {
     }
 
     private record Item(Symbol symbol, String caption, ComponentType type) {
+        String group() {
+            return type != null ? type.category().name() : symbol.key().startsWith("line:") ? "lines" : "transforms";
+        }
     }
 
     private static List<SvgWriter.Entry> layout(List<Item> items) {
@@ -92,7 +113,7 @@ public final class SymbolSheet {
             double captionWidth = 0.45 * it.caption().length();
             double w = Math.ceil(Math.max(b.width(), captionWidth) + 3);
             double h = Math.ceil(b.height() + 4);
-            String group = it.type() == null ? "lines" : it.type().category().name();
+            String group = it.group();
             boolean newCategory = last != null && !last.equals(group);
             if (x > 0 && (x + w > ROW_WIDTH || newCategory)) {
                 x = 0;
