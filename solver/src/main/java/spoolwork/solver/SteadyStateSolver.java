@@ -67,7 +67,7 @@ public final class SteadyStateSolver {
         Network net = eq.net;
         int n = net.size();
         Newton newton = new Newton(options.linearMethod(), options.maxIterations());
-        double[] x0 = new double[n];
+        double[] x0 = net.initialGuess();
         Newton.Result r = newton.solve(net, x0, deadline);
         int iterations = r.iterations();
         if (!r.converged() && options.continuation()) {
@@ -92,7 +92,7 @@ public final class SteadyStateSolver {
 
     private Newton.Result gminStepping(Network net, Newton newton, long deadline) {
         double g = 10 * net.flowRef() / net.pressureRef();
-        double[] x = new double[net.size()];
+        double[] x = net.initialGuess();
         int its = 0;
         double factor = 10;
         while (true) {
@@ -118,7 +118,7 @@ public final class SteadyStateSolver {
 
     private Newton.Result sourceStepping(Network net, Newton newton, long deadline) {
         net.setExtraConductance(0);
-        double[] x = new double[net.size()];
+        double[] x = net.initialGuess();
         double lambda = 0;
         double step = 0.1;
         int its = 0;
@@ -165,6 +165,9 @@ public final class SteadyStateSolver {
         }
         Report nodeReport = new Report();
         eq.nodes.report(x, net, nodeReport);
+        for (Element b : eq.lineBranches.values()) {
+            b.report(x, net, nodeReport);
+        }
         nodeReport.power.forEach((k, v) -> power.merge(k, v, Double::sum));
         Map<String, ComponentResult> comps = new LinkedHashMap<>();
         Map<NetNode, Double> portFlowInto = new HashMap<>();

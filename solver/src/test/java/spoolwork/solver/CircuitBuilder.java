@@ -58,7 +58,7 @@ final class CircuitBuilder {
 
     /** An ideal (lossless) line. */
     CircuitBuilder ideal(String from, String to) {
-        lines.add(new Line("L" + next++, end(from), end(to), List.of(), 0.012, 1, LineKind.PRESSURE, true));
+        lines.add(new Line("w" + next++, end(from), end(to), List.of(), 0.012, 1, LineKind.PRESSURE, true));
         return this;
     }
 
@@ -69,7 +69,7 @@ final class CircuitBuilder {
     }
 
     CircuitBuilder shaft(String from, String to) {
-        lines.add(new Line("L" + next++, end(from), end(to), List.of(), 0, 0, LineKind.SHAFT, true));
+        lines.add(new Line("s" + next++, end(from), end(to), List.of(), 0, 0, LineKind.SHAFT, true));
         return this;
     }
 

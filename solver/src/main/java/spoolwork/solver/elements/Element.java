@@ -18,6 +18,10 @@ public abstract class Element {
     /** Adds residuals into f and Jacobian entries into j (j may be null). */
     public abstract void load(double[] x, double[] f, Jacobian j, Network net);
 
+    /** Writes a starting value for this element's own unknowns into x (default: rest, zero). */
+    public void initialGuess(double[] x, Network net) {
+    }
+
     /** Reports flows, values and power at the solution x. */
     public abstract void report(double[] x, Network net, Report r);
 

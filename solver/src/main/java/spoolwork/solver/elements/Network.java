@@ -127,6 +127,15 @@ public final class Network implements NonlinearSystem {
         }
     }
 
+    /** The starting point of Newton: pressures zero, elements' own unknowns as they choose. */
+    public double[] initialGuess() {
+        double[] x = new double[size()];
+        for (Element e : elements) {
+            e.initialGuess(x, this);
+        }
+        return x;
+    }
+
     @Override
     public int size() {
         return kinds.size();

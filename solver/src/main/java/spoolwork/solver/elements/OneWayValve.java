@@ -93,6 +93,12 @@ public abstract class OneWayValve extends Element {
             return PowerKind.RELIEF;
         }
 
+        /** Starting half open lets Newton find the relieving pressure at once instead of creeping up to it. */
+        @Override
+        public void initialGuess(double[] xs, Network net) {
+            xs[q] = 0.5 * net.flowRef();
+        }
+
         @Override
         public void report(double[] xs, Network net, Report r) {
             super.report(xs, net, r);

@@ -13,6 +13,7 @@ public final class Newton {
 
     private static final double PRESSURE_STEP_FLOOR = 20e5;
     private static final double STEP_TOLERANCE = 1e-6;
+    private static final boolean TRACE = Boolean.getBoolean("spoolwork.solver.trace");
 
     private final LinearMethod method;
     private final int maxIterations;
@@ -41,6 +42,8 @@ public final class Newton {
             return new Result(x0.clone(), false, 0, "residual not finite at the start", worst(s, f));
         }
         double merit = merit(f, rowScale);
+        double[] history = new double[4];
+        int watchdog = 8;
         for (int it = 0; it < maxIterations; it++) {
             if (System.nanoTime() > deadlineNanos) {
                 return new Result(x, false, it, "time limit reached", worst(s, f));
@@ -57,30 +60,37 @@ public final class Newton {
                 return new Result(x, false, it, "singular Jacobian", worst(s, f));
             }
             double stepNorm = 0;
-            double alpha = 1;
+            double[] dir = new double[n];
             for (int i = 0; i < n; i++) {
                 stepNorm = Math.max(stepNorm, Math.abs(y[i]));
                 double dx = y[i] * colScale[i];
                 if (s.isPressure(i)) {
-                    double limit = Math.max(PRESSURE_STEP_FLOOR, 0.5 * Math.abs(x[i]));
-                    if (Math.abs(dx) > limit) {
-                        alpha = Math.min(alpha, limit / Math.abs(dx));
-                    }
+                    // limit each pressure's change on its own, as circuit simulators limit junction voltages
+                    double limit = Math.max(Math.max(PRESSURE_STEP_FLOOR, 0.5 * colScale[i]), 0.5 * Math.abs(x[i]));
+                    dx = Math.max(-limit, Math.min(limit, dx));
                 }
+                dir[i] = dx;
             }
             boolean small = within(s, f);
             if (small && stepNorm <= STEP_TOLERANCE) {
                 return new Result(x, true, it, null, -1);
             }
+            history[it % history.length] = merit;
+            double reference = 0;
+            for (double h : history) {
+                reference = Math.max(reference, h);
+            }
             boolean accepted = false;
+            double alpha = 1;
             for (int ls = 0; ls < 40; ls++) {
                 for (int i = 0; i < n; i++) {
-                    xt[i] = x[i] + alpha * y[i] * colScale[i];
+                    xt[i] = x[i] + alpha * dir[i];
                 }
                 s.evaluate(xt, ft, null);
                 if (finite(ft)) {
                     double mt = merit(ft, rowScale);
-                    if (mt <= (1 - 1e-4 * alpha) * merit || (mt == 0 && merit == 0)) {
+                    // non-monotone Armijo test against the worst of the last few merits (Grippo et al. 1986)
+                    if (mt <= reference - 1e-4 * alpha * 2 * merit || (mt == 0 && merit == 0)) {
                         accepted = true;
                         merit = mt;
                         break;
@@ -88,11 +98,28 @@ public final class Newton {
                 }
                 alpha *= 0.5;
             }
-            if (!accepted) {
-                if (small) {
-                    return new Result(x, true, it, null, -1);
+            if (!accepted && small) {
+                return new Result(x, true, it, null, -1);
+            }
+            if (!accepted && watchdog > 0) {
+                // A flat merit (a saturated path, a closed valve the pressure must climb to) stalls the line
+                // search; take the limited full step a few times, as circuit simulators do without one.
+                watchdog--;
+                for (int i = 0; i < n; i++) {
+                    xt[i] = x[i] + dir[i];
                 }
+                s.evaluate(xt, ft, null);
+                if (finite(ft)) {
+                    accepted = true;
+                    alpha = 1;
+                    merit = merit(ft, rowScale);
+                }
+            }
+            if (!accepted) {
                 return new Result(x, false, it + 1, "no descent along the Newton step", worst(s, f));
+            }
+            if (TRACE) {
+                System.err.printf("it %d alpha %.3g step %.3g merit %.3g%n", it, alpha, stepNorm, merit);
             }
             System.arraycopy(xt, 0, x, 0, n);
             lin.clear();
