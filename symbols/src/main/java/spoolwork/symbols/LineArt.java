@@ -31,6 +31,12 @@ public final class LineArt {
         return List.of(new Shape.Polyline(route, false, Stroke.of(kind)));
     }
 
+    /** The dash-dot outline drawn round an assembly (a manifold block, a combined unit), grid units. */
+    public static Shape enclosure(Box around) {
+        return new Shape.Polyline(List.of(new Point(around.minX(), around.minY()), new Point(around.maxX(), around.minY()),
+                new Point(around.maxX(), around.maxY()), new Point(around.minX(), around.maxY())), true, Stroke.ENCLOSURE);
+    }
+
     /** The connection dot drawn where three or more lines are joined. */
     public static Shape junctionDot(Point at) {
         return new Shape.Circle(at, DOT_RADIUS, true, Stroke.SOLID);

@@ -75,6 +75,7 @@ public final class SymbolSheet {
         List<Shape> cross = new ArrayList<>(LineArt.line(List.of(new Point(0, 0), new Point(6, 0)), LineKind.PRESSURE));
         cross.addAll(LineArt.line(List.of(new Point(3, -3), new Point(3, 3)), LineKind.PRESSURE));
         out.add(new Item(legend("line:crossing", cross), "Crossing (not joined)", null));
+        out.add(new Item(legend("line:enclosure", List.of(LineArt.enclosure(new Box(0, 0, 6, 4)))), "Assembly outline", null));
         return out;
     }
 

@@ -53,6 +53,14 @@ class LineArtTest {
     }
 
     @Test
+    void enclosureIsAClosedDashDotOutline() {
+        Shape.Polyline e = (Shape.Polyline) LineArt.enclosure(new Box(1, 2, 7, 5));
+        assertTrue(e.closed());
+        assertEquals(Stroke.ENCLOSURE, e.stroke());
+        assertEquals(new Box(1, 2, 7, 5), e.bounds());
+    }
+
+    @Test
     void junctionDotIsFilled() {
         Shape.Circle c = (Shape.Circle) LineArt.junctionDot(p(3, 4));
         assertTrue(c.filled());
