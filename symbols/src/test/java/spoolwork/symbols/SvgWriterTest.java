@@ -93,6 +93,23 @@ class SvgWriterTest {
         assertEquals("0.333", SvgWriter.n(1.0 / 3));
     }
 
+    @Test
+    void goldenTurnedAndMirroredSymbol() throws IOException {
+        Symbol s = SymbolLibrary.symbolFor(ComponentType.PILOT_CHECK_VALVE, Map.of(), null)
+                .transformed(new Transform(90, true, 0, 0));
+        compareWithGolden("pilot_check_valve-r90m.svg", SvgWriter.symbol(s));
+    }
+
+    private static void compareWithGolden(String name, String svg) throws IOException {
+        Path golden = Path.of("src/test/resources/golden", name);
+        if (UPDATE) {
+            Files.writeString(golden, svg, StandardCharsets.UTF_8);
+        }
+        assertTrue(Files.exists(golden), "missing golden file " + golden + "; run with -Dspoolwork.golden.update=true");
+        assertEquals(Files.readString(golden, StandardCharsets.UTF_8), svg,
+                "the drawing of " + name + " changed; if intended, rerun with -Dspoolwork.golden.update=true and review the diff");
+    }
+
     @ParameterizedTest(name = "{0}")
     @CsvSource({
         "relief_valve,,",
@@ -111,13 +128,6 @@ class SvgWriterTest {
             }
         }
         String svg = SvgWriter.symbol(SymbolLibrary.symbolFor(t, o, shown));
-        String name = key + (shown == null ? "" : "-" + shown) + ".svg";
-        Path golden = Path.of("src/test/resources/golden", name);
-        if (UPDATE) {
-            Files.writeString(golden, svg, StandardCharsets.UTF_8);
-        }
-        assertTrue(Files.exists(golden), "missing golden file " + golden + "; run with -Dspoolwork.golden.update=true");
-        assertEquals(Files.readString(golden, StandardCharsets.UTF_8), svg,
-                "the drawing of " + name + " changed; if intended, rerun with -Dspoolwork.golden.update=true and review the diff");
+        compareWithGolden(key + (shown == null ? "" : "-" + shown) + ".svg", svg);
     }
 }
