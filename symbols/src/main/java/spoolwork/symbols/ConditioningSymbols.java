@@ -36,9 +36,6 @@ final class ConditioningSymbols {
             d.spring(-1.75, -0.95, 5, -0.95, 0.4, 8);
         }
         d.port("A", -4, 1.5, -4, 3, Direction.DOWN);
-        // Breather of the vented rod-end chamber.
-        d.line(4, 1.5, 4, 2.1);
-        d.line(3.6, 2.1, 4.4, 2.1);
         return d;
     }
 
@@ -92,14 +89,14 @@ final class ConditioningSymbols {
         Draw d = new Draw();
         diamond(d);
         d.stroke(Stroke.PILOT, 0, -2, 0, 2);
-        d.port("A", -2, 0, -3, 0, Direction.LEFT);
-        d.port("B", 2, 0, 3, 0, Direction.RIGHT);
-        d.line(-2.5, 0, -2.5, -3, -1, -3);
-        d.line(1, -3, 2.5, -3, 2.5, 0);
+        d.port("A", -2, 0, -4, 0, Direction.LEFT);
+        d.port("B", 2, 0, 4, 0, Direction.RIGHT);
+        d.line(-3, 0, -3, -3, -1, -3);
+        d.line(1.6, -3, 3, -3, 3, 0);
         CheckSymbols.ballAndSeat(d, 0, -3, Direction.RIGHT);
-        d.spring(0.33, -3, 0.95, -3, 0.3, 3);
-        d.dot(-2.5, 0, 0.15);
-        d.dot(2.5, 0, 0.15);
+        d.spring(0.33, -3, 1.6, -3, 0.3, 4);
+        d.dot(-3, 0, 0.15);
+        d.dot(3, 0, 0.15);
         return d;
     }
 
@@ -117,9 +114,9 @@ final class ConditioningSymbols {
 
     static Draw gauge() {
         Draw d = new Draw();
-        d.circle(0, 0, 1.5);
-        d.arrow(-1.06, 1.06, 1.06, -1.06);
-        d.port("P", 0, 1.5, 0, 2, Direction.DOWN);
+        d.circle(0, -1, 1.5);
+        d.arrow(-1.06, 0.06, 1.06, -2.06);
+        d.port("P", 0, 0.5, 0, 2, Direction.DOWN);
         return d;
     }
 

@@ -218,7 +218,7 @@ final class DirectionalValveSymbols {
                 d.fill(e, yc, e + o * 0.7, yc - 0.35, e + o * 0.7, yc + 0.35);
                 break;
             case SPRING:
-                d.spring(e, yc, e + o * 1.6, yc, 0.35, 5);
+                d.spring(e, yc, e + o * 1.8, yc, Math.min(0.45, h * 0.75), 5);
                 break;
             case DETENT:
                 d.line(e, yc, e + o * 0.4, yc, e + o * 0.6, yc + 0.3, e + o * 0.8, yc,

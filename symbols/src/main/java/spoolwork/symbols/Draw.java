@@ -22,7 +22,6 @@ final class Draw {
 
     private final List<Shape> shapes = new ArrayList<>();
     private final List<Anchor> anchors = new ArrayList<>();
-    private final List<Box> hits = new ArrayList<>();
 
     static Point p(double x, double y) {
         return new Point(x, y);
@@ -182,11 +181,6 @@ final class Draw {
         return this;
     }
 
-    Draw hit(double x0, double y0, double x1, double y1) {
-        hits.add(new Box(x0, y0, x1, y1));
-        return this;
-    }
-
     Symbol build(String key) {
         Box b = null;
         for (Shape s : shapes) {
@@ -195,7 +189,7 @@ final class Draw {
         if (b == null) {
             throw new IllegalStateException(key + " draws nothing");
         }
-        List<Box> h = hits.isEmpty() ? List.of(b) : hits;
-        return new Symbol(key, shapes, anchors, b, h);
+        // The whole drawing picks the symbol: its parts are close together and stubs are short.
+        return new Symbol(key, shapes, anchors, b, List.of(b));
     }
 }

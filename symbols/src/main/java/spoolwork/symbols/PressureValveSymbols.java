@@ -48,29 +48,27 @@ final class PressureValveSymbols {
     static Draw counterbalance() {
         Draw d = frame();
         d.arrow(-1, -1.6, -1, 1.6);
-        d.port("A", 0, -2, 0, -3, Direction.UP);
-        d.port("B", 0, 2, 0, 3, Direction.DOWN);
-        d.stroke(Stroke.PILOT, 0, -2.5, -3, -2.5, -3, -0.8, -2.6, -0.8);
+        d.port("A", 0, -2, 0, -4, Direction.UP);
+        d.port("B", 0, 2, 0, 4, Direction.DOWN);
+        d.stroke(Stroke.PILOT, 0, -3, -3, -3, -3, -0.8, -2.6, -0.8);
         d.fill(-2, -0.8, -2.6, -1.1, -2.6, -0.5);
-        d.dot(0, -2.5, 0.15);
         d.stroke(Stroke.PILOT, -4, 1, -2.6, 1);
         d.fill(-2, 1, -2.6, 0.7, -2.6, 1.3);
         d.anchor("X", -4, 1, Direction.LEFT);
         // Free-flow check B to A, beside the spring.
-        d.line(0, -2.5, 5, -2.5, 5, -0.9);
-        d.line(5, 2.5, 0, 2.5);
-        d.line(5, 2.5, 5, 1.0);
-        CheckSymbols.ballAndSeat(d, 5, 0, Direction.UP);
-        d.dot(0, -2.5, 0.15);
-        d.dot(0, 2.5, 0.15);
+        d.line(0, -3, 6, -3, 6, -1);
+        d.line(0, 3, 6, 3, 6, 1);
+        CheckSymbols.ballAndSeat(d, 6, 0, Direction.UP);
+        d.dot(0, -3, 0.15);
+        d.dot(0, 3, 0.15);
         return d;
     }
 
     private static Draw frame() {
         Draw d = new Draw();
         d.rect(-2, -2, 2, 2);
-        d.spring(2, 0, 3.8, 0, 0.35, 5);
-        d.variable(2.9, 0, 0.8);
+        d.spring(2, 0, 4, 0, 0.45, 5);
+        d.variable(3, 0, 0.9);
         return d;
     }
 

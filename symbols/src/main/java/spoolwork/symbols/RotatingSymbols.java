@@ -28,16 +28,17 @@ final class RotatingSymbols {
     static Draw compensatedPump() {
         Draw d = body();
         outTriangle(d);
-        d.variable(0, 0, 2.3);
-        d.port("P", 0, -R, 0, -3, Direction.UP);
+        d.variable(0, 0, 1.9);
+        // The outlet is one unit longer than on the fixed pump to leave room for the pilot branch and the letter.
+        d.port("P", 0, -R, 0, -4, Direction.UP);
         d.port("S", 0, R, 0, 3, Direction.DOWN);
         // Compensator on the right: outlet pressure through a pilot line against an adjustable spring.
-        d.stroke(Stroke.PILOT, 0, -2.5, 3.4, -2.5, 3.4, -0.8, 2.75, -0.8);
+        d.stroke(Stroke.PILOT, 0, -3, 3.4, -3, 3.4, -0.8, 2.75, -0.8);
         d.head(1.85, -0.8, 3.4, -0.8, 0.9, 0.3);
         d.spring(1.85, 0.8, 3.9, 0.8, 0.35, 5);
         d.line(3.9, 0.3, 3.9, 1.3);
         d.variable(2.9, 0.8, 0.75);
-        d.dot(0, -2.5, 0.15);
+        d.dot(0, -3, 0.15);
         // Case drain, short dashes, down to L.
         d.stroke(Stroke.DRAIN, -Math.sqrt(3), 1, -2, 1, -2, 3);
         d.anchor("L", -2, 3, Direction.DOWN);
@@ -64,12 +65,12 @@ final class RotatingSymbols {
             // A combustion engine: a box carrying the M, to tell it apart from the electric motor's circle.
             d.rect(-2, -2, 2, 2);
             d.text(0, 0, "M", 1.6);
-            d.line(-1.4, 1.4, 1.4, 1.4);
         } else {
             d.circle(0, 0, R);
             d.text(0, 0, "M", 1.6);
         }
-        shaftRight(d, false);
+        // No rotation arrow here: the pump it drives carries the one arrow of the coupled shaft.
+        d.shaft(R, 0, 4, 0, Direction.RIGHT);
         return d;
     }
 

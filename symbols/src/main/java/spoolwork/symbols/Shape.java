@@ -79,7 +79,8 @@ public sealed interface Shape {
 
     /**
      * A circular arc from angle {@code startDeg} sweeping {@code sweepDeg} (positive = clockwise on the
-     * sheet), degrees.
+     * sheet), degrees. Toolkits that count angles counter-clockwise on a y-down screen (JavaFX {@code Arc})
+     * take start −startDeg and length −sweepDeg.
      */
     record Arc(Point centre, double radius, double startDeg, double sweepDeg, Stroke stroke) implements Shape {
         public Arc {

@@ -75,6 +75,34 @@ public final class SvgWriter {
         return b.toString();
     }
 
+    /**
+     * A circuit drawing as an SVG document: one group per symbol (with its tag and port letters), the lines in
+     * a group of their own, junction dots and notes.
+     */
+    public static String circuit(CircuitDrawing drawing) {
+        Box view = drawing.bounds().grow(2);
+        StringBuilder b = new StringBuilder();
+        open(b, view);
+        b.append("<g class=\"lines\" fill=\"none\" stroke=\"black\" stroke-width=\"").append(n(STROKE))
+                .append("\" stroke-linejoin=\"round\">\n");
+        for (Shape s : drawing.lines()) {
+            shape(b, s);
+        }
+        for (Shape s : drawing.dots()) {
+            shape(b, s);
+        }
+        b.append("</g>\n");
+        for (int i = 0; i < drawing.symbols().size(); i++) {
+            group(b, drawing.symbols().get(i), "symbol-" + i, true);
+            text(b, drawing.tags().get(i), "tag");
+        }
+        for (Text t : drawing.notes()) {
+            text(b, t, "note");
+        }
+        b.append("</svg>\n");
+        return b.toString();
+    }
+
     private static Box captionBox(Entry e) {
         Box bb = e.symbol().bounds();
         return new Text(new Point(bb.centre().x(), bb.maxY() + 1.3), e.caption(), 0.6, Shape.TextAnchor.MIDDLE).bounds();

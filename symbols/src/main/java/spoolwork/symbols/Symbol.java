@@ -32,6 +32,20 @@ public record Symbol(String key, List<Shape> shapes, List<Anchor> anchors, Box b
         return anchors.stream().filter(a -> a.port().equals(port)).findFirst();
     }
 
+    /** The anchor nearest to {@code p} within {@code tolerance} grid units, for snapping a line end to a port. */
+    public Optional<Anchor> anchorNear(Point p, double tolerance) {
+        Anchor best = null;
+        double bestD = tolerance;
+        for (Anchor a : anchors) {
+            double d = Math.hypot(a.at().x() - p.x(), a.at().y() - p.y());
+            if (d <= bestD) {
+                best = a;
+                bestD = d;
+            }
+        }
+        return Optional.ofNullable(best);
+    }
+
     /** The symbol moved by a transform: shapes, anchors, bounds and hit areas alike. */
     public Symbol transformed(Transform t) {
         List<Shape> s = new ArrayList<>(shapes.size());

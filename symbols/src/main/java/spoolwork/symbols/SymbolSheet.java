@@ -5,6 +5,8 @@ import java.util.List;
 import java.util.Map;
 
 import spoolwork.model.ComponentType;
+import spoolwork.model.LineKind;
+import spoolwork.model.Point;
 import spoolwork.model.SpoolPosition;
 
 /**
@@ -35,7 +37,54 @@ public final class SymbolSheet {
                 }
             }
         }
+        items.addAll(transformExamples());
+        items.addAll(lineLegend());
         return layout(items);
+    }
+
+    /** One pump and one valve turned and mirrored, to check that text stays upright and letters follow the ports. */
+    private static List<Item> transformExamples() {
+        List<Item> out = new ArrayList<>();
+        for (ComponentType t : List.of(ComponentType.COMPENSATED_PUMP, ComponentType.DIRECTIONAL_4_3)) {
+            Symbol base = SymbolLibrary.symbolFor(t, Map.of(), null);
+            for (boolean m : new boolean[] {false, true}) {
+                for (int r = m ? 0 : 90; r < 360; r += m ? 180 : 90) {
+                    Symbol s = base.transformed(new Transform(r, m, 0, 0));
+                    String tag = "rotated " + r + "°" + (m ? ", mirrored" : "");
+                    out.add(new Item(new Symbol(s.key() + "/" + r + (m ? "m" : ""), s.shapes(), s.anchors(), s.bounds(),
+                            s.hitAreas()), t.label() + ", " + tag, null));
+                }
+            }
+        }
+        return out;
+    }
+
+    /** The line conventions: the kinds of line, a joined tee with its dot, and a crossing without one. */
+    private static List<Item> lineLegend() {
+        List<Item> out = new ArrayList<>();
+        List<Point> straight = List.of(new Point(0, 0), new Point(6, 0));
+        for (LineKind k : List.of(LineKind.PRESSURE, LineKind.PILOT, LineKind.DRAIN, LineKind.SHAFT)) {
+            String name = k == LineKind.PRESSURE ? "Working line" : k == LineKind.PILOT ? "Pilot line"
+                    : k == LineKind.DRAIN ? "Drain line" : "Shaft";
+            out.add(new Item(legend("line:" + k.key(), LineArt.line(straight, k)), name, null));
+        }
+        List<Shape> tee = new ArrayList<>(LineArt.line(List.of(new Point(0, 0), new Point(6, 0)), LineKind.PRESSURE));
+        tee.addAll(LineArt.line(List.of(new Point(3, 0), new Point(3, 3)), LineKind.PRESSURE));
+        tee.add(LineArt.junctionDot(new Point(3, 0)));
+        out.add(new Item(legend("line:junction", tee), "Junction (joined)", null));
+        List<Shape> cross = new ArrayList<>(LineArt.line(List.of(new Point(0, 0), new Point(6, 0)), LineKind.PRESSURE));
+        cross.addAll(LineArt.line(List.of(new Point(3, -3), new Point(3, 3)), LineKind.PRESSURE));
+        out.add(new Item(legend("line:crossing", cross), "Crossing (not joined)", null));
+        out.add(new Item(legend("line:enclosure", List.of(LineArt.enclosure(new Box(0, 0, 6, 4)))), "Assembly outline", null));
+        return out;
+    }
+
+    private static Symbol legend(String key, List<Shape> shapes) {
+        Box b = null;
+        for (Shape s : shapes) {
+            b = b == null ? s.bounds() : b.union(s.bounds());
+        }
+        return new Symbol(key, shapes, List.of(), b, List.of(b));
     }
 
     /** The review sheet as an SVG document. */
@@ -49,6 +98,9 @@ public final class SymbolSheet {
     }
 
     private record Item(Symbol symbol, String caption, ComponentType type) {
+        String group() {
+            return type != null ? type.category().name() : symbol.key().startsWith("line:") ? "lines" : "transforms";
+        }
     }
 
     private static List<SvgWriter.Entry> layout(List<Item> items) {
@@ -56,13 +108,14 @@ public final class SymbolSheet {
         double x = 0;
         double y = 0;
         double rowHeight = 0;
-        ComponentType last = null;
+        String last = null;
         for (Item it : items) {
             Box b = it.symbol().bounds();
             double captionWidth = 0.45 * it.caption().length();
             double w = Math.ceil(Math.max(b.width(), captionWidth) + 3);
             double h = Math.ceil(b.height() + 4);
-            boolean newCategory = last != null && last.category() != it.type().category();
+            String group = it.group();
+            boolean newCategory = last != null && !last.equals(group);
             if (x > 0 && (x + w > ROW_WIDTH || newCategory)) {
                 x = 0;
                 y += rowHeight;
@@ -74,7 +127,7 @@ public final class SymbolSheet {
             out.add(new SvgWriter.Entry(it.symbol().transformed(Transform.translation(ox, oy)), it.caption(), true));
             x += w;
             rowHeight = Math.max(rowHeight, h);
-            last = it.type();
+            last = group;
         }
         return out;
     }

@@ -1,10 +1,8 @@
 package spoolwork.editor.cli;
 
 import java.io.IOException;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
 import java.util.concurrent.Callable;
 
 import picocli.CommandLine.Command;
@@ -26,20 +24,12 @@ public final class SymbolsCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws IOException {
-        Path target = output.toAbsolutePath();
-        Path dir = target.getParent();
+        Path dir = output.toAbsolutePath().getParent();
         if (dir != null && !Files.isDirectory(dir)) {
             spec.commandLine().getErr().println("error: folder does not exist: " + dir);
             return 2;
         }
-        // Write beside the target and move into place, so a failed write never leaves half a file.
-        Path tmp = Files.createTempFile(dir, ".symbols", ".svg.tmp");
-        try {
-            Files.writeString(tmp, SymbolSheet.svg(), StandardCharsets.UTF_8);
-            Files.move(tmp, target, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
-        } finally {
-            Files.deleteIfExists(tmp);
-        }
+        Path target = TextFiles.writeAtomically(output, SymbolSheet.svg());
         spec.commandLine().getOut().println("wrote " + target);
         return 0;
     }

@@ -1,0 +1,339 @@
+package spoolwork.solver;
+
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+
+import spoolwork.model.ActuatorState;
+import spoolwork.model.Circuit;
+import spoolwork.model.Component;
+import spoolwork.model.ComponentType;
+import spoolwork.model.Endpoint;
+import spoolwork.model.Line;
+import spoolwork.model.LineKind;
+import spoolwork.model.OperatingState;
+import spoolwork.model.PortSpec;
+import spoolwork.model.SpoolPosition;
+import spoolwork.model.netlist.NetNode;
+import spoolwork.model.netlist.Netlist;
+import spoolwork.solver.elements.Actuator;
+import spoolwork.solver.elements.Branch;
+import spoolwork.solver.elements.Conductance;
+import spoolwork.solver.elements.DropLaw;
+import spoolwork.solver.elements.Element;
+import spoolwork.solver.elements.FlowControl;
+import spoolwork.solver.elements.LineLaw;
+import spoolwork.solver.elements.Network;
+import spoolwork.solver.elements.NodeConductance;
+import spoolwork.solver.elements.OneWayValve;
+import spoolwork.solver.elements.PilotPath;
+import spoolwork.solver.elements.PowerKind;
+import spoolwork.solver.elements.Pump;
+import spoolwork.solver.fluid.FluidProperties;
+
+/**
+ * Turns a circuit in one operating state into equations. Points joined by ideal lines share one node;
+ * every reservoir port is the reference node. Each component becomes one or more elements.
+ */
+final class CircuitEquations {
+    /** Nominal speed for a motor's leakage conductance: the catalogue's 4-pole 50 Hz speed (common practice). */
+    static final double MOTOR_NOMINAL_SPEED = 1450.0 / 60;
+
+    final Circuit circuit;
+    final OperatingState state;
+    final Netlist netlist;
+    final FluidProperties fluid;
+    final Network net;
+    /** Node index of every netlist node; −1 for the reservoir. */
+    final Map<NetNode, Integer> nodeOf = new HashMap<>();
+    /** Representative names of node indices. */
+    final List<String> nodeNames = new ArrayList<>();
+    /** Elements of each component id. */
+    final Map<String, List<Element>> elementsOf = new LinkedHashMap<>();
+    /** Loss-bearing line elements by line id. */
+    final Map<String, Branch> lineBranches = new LinkedHashMap<>();
+    final Map<String, LineLaw> lineLaws = new LinkedHashMap<>();
+    final Map<String, Pump> pumps = new LinkedHashMap<>();
+    final Map<String, Double> pumpSpeeds = new LinkedHashMap<>();
+    final NodeConductance nodes;
+
+    CircuitEquations(Circuit circuit, OperatingState state, Netlist netlist, SolverOptions options) {
+        this.circuit = circuit;
+        this.state = state;
+        this.netlist = netlist;
+        this.fluid = new FluidProperties(circuit.fluid());
+        double pRef = 1e6;
+        double qRef = 0;
+        for (Component c : circuit.components()) {
+            for (String k : List.of("cracking_pressure", "setting", "compensator_setting")) {
+                if (c.type().params().containsKey(k) && c.type() != ComponentType.CHECK_VALVE
+                        && c.type() != ComponentType.PILOT_CHECK_VALVE) {
+                    pRef = Math.max(pRef, c.param(k));
+                }
+            }
+            if (c.type().isPump()) {
+                double n = speedOf(c);
+                pumpSpeeds.put(c.id(), n);
+                qRef += c.param("displacement") * n;
+            }
+        }
+        this.net = new Network(fluid, pRef, Math.max(qRef, 1e-5));
+        numberNodes();
+        int[] all = new int[nodeNames.size()];
+        for (int i = 0; i < all.length; i++) {
+            all[i] = i;
+        }
+        nodes = new NodeConductance(all, nodeNames.toArray(new String[0]));
+        net.addElement(nodes);
+        for (Line l : circuit.lines()) {
+            if (l.kind() == LineKind.SHAFT || l.ideal()) {
+                continue;
+            }
+            LineLaw law = new LineLaw(l.diameter(), l.length(), fluid.density(), fluid.kinematicViscosity(),
+                    options.roughness());
+            Branch b = new Branch(l.id(), node(l.from()), null, node(l.to()), null, law, PowerKind.LINE, net);
+            net.addElement(b);
+            lineBranches.put(l.id(), b);
+            lineLaws.put(l.id(), law);
+        }
+        for (Component c : circuit.components()) {
+            List<Element> es = new ArrayList<>();
+            build(c, es);
+            es.forEach(net::addElement);
+            elementsOf.put(c.id(), es);
+        }
+    }
+
+    private double speedOf(Component pump) {
+        String driver = netlist.drivers().get(pump.id());
+        if (driver != null) {
+            Component pm = circuit.component(driver).orElseThrow();
+            return state.speeds().getOrDefault(driver, pm.param("speed"));
+        }
+        return pump.param("speed");
+    }
+
+    private void numberNodes() {
+        Map<NetNode, NetNode> parent = new HashMap<>();
+        for (NetNode n : netlist.graph().vertexSet()) {
+            parent.put(n, n);
+        }
+        NetNode ground = null;
+        for (NetNode.Port r : netlist.reservoirPorts()) {
+            if (ground == null) {
+                ground = r;
+            } else {
+                union(parent, ground, r);
+            }
+        }
+        for (Line l : circuit.lines()) {
+            if (l.kind() != LineKind.SHAFT && l.ideal()) {
+                union(parent, Netlist.node(l.from()), Netlist.node(l.to()));
+            }
+        }
+        NetNode groundRoot = ground == null ? null : find(parent, ground);
+        Map<NetNode, Integer> index = new HashMap<>();
+        // number along the drawing: component ports in order, then junctions
+        List<NetNode> order = new ArrayList<>();
+        for (Component c : circuit.components()) {
+            for (PortSpec p : c.type().ports()) {
+                if (!p.mechanical()) {
+                    order.add(new NetNode.Port(c.id(), p.name()));
+                }
+            }
+        }
+        circuit.junctions().forEach(j -> order.add(new NetNode.Junction(j.id())));
+        for (NetNode n : order) {
+            NetNode root = find(parent, n);
+            if (root.equals(groundRoot)) {
+                nodeOf.put(n, -1);
+                continue;
+            }
+            Integer i = index.get(root);
+            if (i == null) {
+                i = net.addNode(describe(n));
+                index.put(root, i);
+                nodeNames.add(describe(n));
+            }
+            nodeOf.put(n, i);
+        }
+    }
+
+    String describe(NetNode n) {
+        if (n instanceof NetNode.Port p) {
+            return circuit.component(p.componentId()).map(Component::tag).orElse(p.componentId()) + "." + p.port();
+        }
+        return ((NetNode.Junction) n).junctionId();
+    }
+
+    private static NetNode find(Map<NetNode, NetNode> parent, NetNode n) {
+        NetNode r = n;
+        while (!parent.get(r).equals(r)) {
+            r = parent.get(r);
+        }
+        NetNode c = n;
+        while (!parent.get(c).equals(r)) {
+            NetNode next = parent.get(c);
+            parent.put(c, r);
+            c = next;
+        }
+        return r;
+    }
+
+    private static void union(Map<NetNode, NetNode> parent, NetNode a, NetNode b) {
+        NetNode ra = find(parent, a);
+        NetNode rb = find(parent, b);
+        if (!ra.equals(rb)) {
+            parent.put(rb, ra);
+        }
+    }
+
+    int node(Endpoint e) {
+        return nodeOf.get(Netlist.node(e));
+    }
+
+    int node(Component c, String port) {
+        return nodeOf.get(new NetNode.Port(c.id(), port));
+    }
+
+    private boolean connected(Component c, String port) {
+        for (Line l : circuit.linesAt(c.id())) {
+            for (Endpoint e : List.of(l.from(), l.to())) {
+                if (e instanceof Endpoint.PortRef p && p.componentId().equals(c.id()) && p.port().equals(port)) {
+                    return true;
+                }
+            }
+        }
+        return false;
+    }
+
+    private void build(Component c, List<Element> es) {
+        String t = c.tag();
+        switch (c.type()) {
+            case FIXED_PUMP, COMPENSATED_PUMP -> {
+                boolean comp = c.type() == ComponentType.COMPENSATED_PUMP;
+                int drain = comp && connected(c, "L") ? node(c, "L") : Integer.MIN_VALUE;
+                Pump p = new Pump(t, node(c, "S"), node(c, "P"), drain, c.param("displacement"),
+                        pumpSpeeds.get(c.id()), c.param("volumetric_efficiency"), c.param("overall_efficiency"),
+                        c.param("reference_pressure"), comp, comp ? c.param("compensator_setting") : 0,
+                        comp ? c.param("compensator_band") : 1);
+                pumps.put(c.id(), p);
+                es.add(p);
+            }
+            case HYDRAULIC_MOTOR -> {
+                double d = c.param("displacement");
+                double k = c.param("mechanical_efficiency") * d / (2 * Math.PI);
+                double leak = (1 - c.param("volumetric_efficiency")) * d * MOTOR_NOMINAL_SPEED
+                        / c.param("reference_pressure");
+                ActuatorState a = state.actuatorOf(c.id());
+                boolean free = a.mode() == ActuatorState.Mode.FREE;
+                boolean constant = a.loadKind() == ActuatorState.LoadKind.CONSTANT;
+                es.add(new Actuator(t, true, node(c, "A"), node(c, "B"), d, d, k, k,
+                        constant ? a.load() : 0, constant ? 0 : a.load(), 0, leak, free, free, net));
+            }
+            case DOUBLE_ACTING_CYLINDER, SINGLE_ACTING_CYLINDER, DOUBLE_ROD_CYLINDER -> {
+                double bore = c.param("bore");
+                double rod = c.param("rod");
+                double full = Math.PI * bore * bore / 4;
+                double annulus = full - Math.PI * rod * rod / 4;
+                double cap = c.type() == ComponentType.DOUBLE_ROD_CYLINDER ? annulus : full;
+                double rodSide = c.type() == ComponentType.SINGLE_ACTING_CYLINDER ? 0 : annulus;
+                int b = c.type() == ComponentType.SINGLE_ACTING_CYLINDER ? -1 : node(c, "B");
+                ActuatorState a = state.actuatorOf(c.id());
+                boolean constant = a.loadKind() == ActuatorState.LoadKind.CONSTANT;
+                double fixed = constant ? a.load() : 0;
+                if (c.type() == ComponentType.SINGLE_ACTING_CYLINDER && c.option("return").equals("spring")) {
+                    // the spring's force at mid-stroke stands for its force over the stroke
+                    fixed += c.param("spring_preload") + c.param("spring_rate") * c.param("stroke") / 2;
+                }
+                boolean plus = a.mode() != ActuatorState.Mode.HELD_EXTENDED;
+                boolean minus = a.mode() != ActuatorState.Mode.HELD_RETRACTED;
+                es.add(new Actuator(t, false, node(c, "A"), b, cap, rodSide, cap, rodSide, fixed,
+                        constant ? 0 : a.load(), c.param("friction"), 0, plus, minus, net));
+            }
+            case RELIEF_VALVE -> es.add(new OneWayValve.Relief(t, node(c, "P"), node(c, "T"),
+                    c.param("cracking_pressure"), c.param("override"), c.param("rated_flow"), net));
+            case REDUCING_VALVE -> es.add(new OneWayValve.Reducing(t, node(c, "P"), node(c, "A"), c.param("setting"),
+                    c.param("override"), c.param("rated_flow"), net));
+            case SEQUENCE_VALVE -> es.add(new OneWayValve.Sequence(t, node(c, "P"), node(c, "A"),
+                    c.param("cracking_pressure"), c.param("override"), c.param("rated_flow"), net));
+            case COUNTERBALANCE_VALVE -> {
+                double rated = c.param("rated_flow");
+                es.add(new OneWayValve.Counterbalance(t, node(c, "A"), node(c, "B"), node(c, "X"), c.param("setting"),
+                        c.param("pilot_ratio"), c.param("override"), rated, net));
+                es.add(new OneWayValve.Check(t, node(c, "B"), "B", node(c, "A"), "A", c.param("check_cracking"),
+                        DropLaw.rated(rated, Math.max(c.param("override"), 1e5)), rated, PowerKind.VALVE, net));
+            }
+            case CHECK_VALVE -> es.add(new OneWayValve.Check(t, node(c, "A"), "A", node(c, "B"), "B",
+                    c.param("cracking_pressure"), DropLaw.rated(c.param("rated_flow"), c.param("rated_drop")),
+                    c.param("rated_flow"), PowerKind.VALVE, net));
+            case PILOT_CHECK_VALVE -> {
+                es.add(new OneWayValve.Check(t, node(c, "A"), "A", node(c, "B"), "B", c.param("cracking_pressure"),
+                        DropLaw.rated(c.param("rated_flow"), c.param("rated_drop")), c.param("rated_flow"),
+                        PowerKind.VALVE, net));
+                es.add(new PilotPath(t, node(c, "A"), node(c, "B"), node(c, "X"), c.param("pilot_ratio"),
+                        c.param("cracking_pressure"), c.param("rated_flow"), c.param("rated_drop")));
+            }
+            case ORIFICE, THROTTLE -> {
+                double d = c.param("diameter");
+                // laminar below an orifice Reynolds number of about 10 (from memory)
+                double qt = Math.PI * d * fluid.kinematicViscosity() * 10 / 4;
+                es.add(new Branch(t, node(c, "A"), "A", node(c, "B"), "B",
+                        DropLaw.orifice(c.param("discharge_coefficient"), d, fluid.density(), qt), PowerKind.THROTTLE,
+                        net));
+            }
+            case FLOW_CONTROL -> es.add(new FlowControl(t, node(c, "A"), node(c, "B"), c.param("set_flow"),
+                    c.param("minimum_drop"), net));
+            case DIRECTIONAL_2_2, DIRECTIONAL_3_2, DIRECTIONAL_4_2, DIRECTIONAL_4_3 -> directional(c, es);
+            case FILTER -> {
+                double r = c.param("clean_drop") / c.param("rated_flow");
+                es.add(new Branch(t, node(c, "A"), "A", node(c, "B"), "B", DropLaw.linear(r), PowerKind.VALVE, net));
+                es.add(new OneWayValve.Check(t, node(c, "A"), "A", node(c, "B"), "B", c.param("bypass_cracking"),
+                        DropLaw.linear(r), c.param("rated_flow"), PowerKind.VALVE, net));
+            }
+            case COOLER -> es.add(new Branch(t, node(c, "A"), "A", node(c, "B"), "B",
+                    DropLaw.rated(c.param("rated_flow"), c.param("rated_drop")), PowerKind.VALVE, net));
+            case FLOW_METER -> es.add(new Branch(t, node(c, "A"), "A", node(c, "B"), "B",
+                    DropLaw.linear(1.0 / c.param("full_scale")), PowerKind.VALVE, net));
+            default -> {
+                // reservoir, prime mover, accumulator, gauge, plug: no flow at steady state
+            }
+        }
+    }
+
+    private void directional(Component c, List<Element> es) {
+        String want = state.positionOf(c.id());
+        SpoolPosition pos = null;
+        for (SpoolPosition sp : c.type().spoolPositions(c.options())) {
+            if (sp.name().equals(want)) {
+                pos = sp;
+            }
+        }
+        if (pos == null) {
+            throw new IllegalStateException(c.tag() + " has no spool position " + want);
+        }
+        double rated = c.param("rated_flow");
+        double drop = c.param("rated_drop");
+        List<String> joined = new ArrayList<>();
+        for (SpoolPosition.FlowPath fp : pos.paths()) {
+            es.add(new Branch(c.tag(), node(c, fp.from()), fp.from(), node(c, fp.to()), fp.to(),
+                    DropLaw.rated(rated, drop), PowerKind.VALVE, net));
+            joined.add(fp.from() + fp.to());
+            joined.add(fp.to() + fp.from());
+        }
+        double leak = c.param("leakage");
+        if (leak <= 0) {
+            return;
+        }
+        for (String pair : List.of("PA", "PB", "AT", "BT")) {
+            String x = pair.substring(0, 1);
+            String y = pair.substring(1);
+            if (c.type().port(x).isEmpty() || c.type().port(y).isEmpty() || joined.contains(pair)) {
+                continue;
+            }
+            es.add(new Conductance(c.tag(), node(c, x), x, node(c, y), y, leak));
+        }
+    }
+}

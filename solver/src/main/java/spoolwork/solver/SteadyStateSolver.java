@@ -1,0 +1,308 @@
+package spoolwork.solver;
+
+import java.util.ArrayList;
+import java.util.EnumMap;
+import java.util.HashMap;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+
+import spoolwork.model.Circuit;
+import spoolwork.model.Component;
+import spoolwork.model.ComponentType;
+import spoolwork.model.Line;
+import spoolwork.model.LineKind;
+import spoolwork.model.OperatingState;
+import spoolwork.model.PortSpec;
+import spoolwork.model.netlist.NetNode;
+import spoolwork.model.netlist.Netlist;
+import spoolwork.solver.elements.Element;
+import spoolwork.solver.elements.Network;
+import spoolwork.solver.elements.PowerKind;
+import spoolwork.solver.elements.Report;
+import spoolwork.solver.numeric.Newton;
+import spoolwork.solver.topology.TopologyCheck;
+
+/**
+ * Computes the steady operating point of a whole circuit in one operating state.
+ *
+ * <p>First a topology check; an error there stops the solve with its diagnostic. Then Newton's method on
+ * the whole system from rest; if it fails, gmin stepping (a conductance from every node to the reservoir,
+ * stepped down to nothing), then source stepping (pump flow raised from 10 % to full). Time and iteration
+ * limits apply throughout; a failure is reported with the rows furthest from balance.
+ */
+public final class SteadyStateSolver {
+    /** Standard atmosphere, Pa, for absolute pressures. */
+    public static final double ATMOSPHERE = 101_325;
+
+    private final SolverOptions options;
+
+    public SteadyStateSolver() {
+        this(SolverOptions.defaults());
+    }
+
+    public SteadyStateSolver(SolverOptions options) {
+        this.options = options;
+    }
+
+    /** Solves every operating state of the circuit, in order. */
+    public List<Solution> solveAll(Circuit circuit) {
+        List<Solution> out = new ArrayList<>();
+        for (OperatingState s : circuit.states()) {
+            out.add(solve(circuit, s));
+        }
+        return out;
+    }
+
+    /** Solves the circuit in the given operating state. Never throws for a valid circuit; never NaN. */
+    public Solution solve(Circuit circuit, OperatingState state) {
+        long start = System.nanoTime();
+        long deadline = start + (long) (options.timeLimit() * 1e9);
+        Netlist netlist = new Netlist(circuit, state);
+        List<Diagnostic> diagnostics = new ArrayList<>(new TopologyCheck(circuit, state, netlist).run());
+        if (diagnostics.stream().anyMatch(d -> d.severity() == Severity.ERROR)) {
+            return Solution.failed(state.name(), 0, diagnostics);
+        }
+        CircuitEquations eq = new CircuitEquations(circuit, state, netlist, options);
+        Network net = eq.net;
+        int n = net.size();
+        Newton newton = new Newton(options.linearMethod(), options.maxIterations());
+        double[] x0 = net.initialGuess();
+        Newton.Result r = newton.solve(net, x0, deadline);
+        int iterations = r.iterations();
+        if (!r.converged() && options.continuation()) {
+            Newton.Result g = gminStepping(net, newton, deadline);
+            iterations += g.iterations();
+            if (!g.converged()) {
+                Newton.Result s = sourceStepping(net, newton, deadline);
+                iterations += s.iterations();
+                r = s.converged() ? s : r;
+            } else {
+                r = g;
+            }
+        }
+        net.setExtraConductance(0);
+        net.setSourceScale(1);
+        if (!r.converged()) {
+            diagnostics.add(failure(eq, r));
+            return Solution.failed(state.name(), iterations, diagnostics);
+        }
+        return results(eq, state, r.x(), iterations, diagnostics);
+    }
+
+    private Newton.Result gminStepping(Network net, Newton newton, long deadline) {
+        double g = 10 * net.flowRef() / net.pressureRef();
+        double[] x = net.initialGuess();
+        int its = 0;
+        double factor = 10;
+        while (true) {
+            net.setExtraConductance(g);
+            Newton.Result r = newton.solve(net, x, deadline);
+            its += r.iterations();
+            if (!r.converged()) {
+                if (factor < 1.5 || System.nanoTime() > deadline || x == null) {
+                    return new Newton.Result(r.x(), false, its, "gmin stepping stalled", r.worstRow());
+                }
+                g = g * factor;
+                factor = Math.sqrt(factor);
+                g = g / factor;
+                continue;
+            }
+            x = r.x();
+            if (g == 0) {
+                return new Newton.Result(x, true, its, null, -1);
+            }
+            g = g < 1e-9 * net.flowRef() / net.pressureRef() ? 0 : g / factor;
+        }
+    }
+
+    private Newton.Result sourceStepping(Network net, Newton newton, long deadline) {
+        net.setExtraConductance(0);
+        double[] x = net.initialGuess();
+        double lambda = 0;
+        double step = 0.1;
+        int its = 0;
+        while (lambda < 1) {
+            double next = Math.min(1, lambda + step);
+            net.setSourceScale(next);
+            Newton.Result r = newton.solve(net, x, deadline);
+            its += r.iterations();
+            if (r.converged()) {
+                x = r.x();
+                lambda = next;
+                step = Math.min(0.5, step * 2);
+            } else {
+                step /= 4;
+                if (step < 1e-3 || System.nanoTime() > deadline) {
+                    return new Newton.Result(x, false, its, "source stepping stalled at " + lambda, r.worstRow());
+                }
+            }
+        }
+        return new Newton.Result(x, true, its, null, -1);
+    }
+
+    private Diagnostic failure(CircuitEquations eq, Newton.Result r) {
+        List<String> where = new ArrayList<>();
+        String detail = "";
+        if (r.worstRow() >= 0) {
+            String owner = eq.net.owner(r.worstRow());
+            where.add(owner);
+            detail = "; the largest imbalance is at " + owner + " ("
+                    + (eq.net.kind(r.worstRow()) == Network.Kind.PRESSURE ? "flow balance of the node" : "its own law")
+                    + ")";
+        }
+        return new Diagnostic(Severity.ERROR, "the circuit did not solve: " + r.failure() + detail
+                + ". Check settings and loads near the elements named", where);
+    }
+
+    private Solution results(CircuitEquations eq, OperatingState state, double[] x, int iterations,
+                             List<Diagnostic> diagnostics) {
+        Circuit circuit = eq.circuit;
+        Network net = eq.net;
+        EnumMap<PowerKind, Double> power = new EnumMap<>(PowerKind.class);
+        for (PowerKind k : PowerKind.values()) {
+            power.put(k, 0.0);
+        }
+        Report nodeReport = new Report();
+        eq.nodes.report(x, net, nodeReport);
+        for (Element b : eq.lineBranches.values()) {
+            b.report(x, net, nodeReport);
+        }
+        nodeReport.power.forEach((k, v) -> power.merge(k, v, Double::sum));
+        Map<String, ComponentResult> comps = new LinkedHashMap<>();
+        Map<NetNode, Double> portFlowInto = new HashMap<>();
+        double pumpInput = 0;
+        double pumpHydraulic = 0;
+        Map<String, Double> inputByPump = new HashMap<>();
+        for (Component c : circuit.components()) {
+            Report rep = new Report();
+            for (Element e : eq.elementsOf.get(c.id())) {
+                e.report(x, net, rep);
+            }
+            rep.power.forEach((k, v) -> power.merge(k, v, Double::sum));
+            Map<String, PortResult> ports = new LinkedHashMap<>();
+            for (PortSpec ps : c.type().ports()) {
+                if (ps.mechanical()) {
+                    continue;
+                }
+                NetNode node = new NetNode.Port(c.id(), ps.name());
+                int i = eq.nodeOf.get(node);
+                double q = rep.portFlows.getOrDefault(ps.name(), 0.0);
+                ports.put(ps.name(), new PortResult(i < 0 ? 0 : x[i], q));
+                portFlowInto.put(node, q);
+            }
+            Map<String, Double> values = new LinkedHashMap<>(rep.values);
+            extras(c, ports, values, rep);
+            if (c.type().isPump()) {
+                pumpInput += values.get("input_power_w");
+                pumpHydraulic += values.get("hydraulic_power_w");
+                inputByPump.put(c.id(), values.get("input_power_w"));
+            }
+            comps.put(c.tag(), new ComponentResult(c.id(), c.tag(), c.type(), ports, values));
+        }
+        for (Component c : circuit.components()) {
+            if (c.type() != ComponentType.PRIME_MOVER) {
+                continue;
+            }
+            double load = 0;
+            for (Map.Entry<String, String> d : eq.netlist.drivers().entrySet()) {
+                if (d.getValue().equals(c.id())) {
+                    load += inputByPump.getOrDefault(d.getKey(), 0.0);
+                }
+            }
+            Map<String, Double> values = new LinkedHashMap<>(comps.get(c.tag()).values());
+            double speed = state.speeds().getOrDefault(c.id(), c.param("speed"));
+            values.put("speed_rpm", speed * 60);
+            values.put("shaft_power_w", load);
+            values.put("rated_power_w", c.param("rated_power"));
+            values.put("load_ratio", load / c.param("rated_power"));
+            if (speed > 0) {
+                values.put("torque_nm", load / (2 * Math.PI * speed));
+            }
+            comps.put(c.tag(), new ComponentResult(c.id(), c.tag(), c.type(), comps.get(c.tag()).ports(), values));
+            if (load > c.param("rated_power")) {
+                diagnostics.add(new Diagnostic(Severity.WARNING, String.format(java.util.Locale.ROOT,
+                        "prime mover %s is loaded to %.0f %% of its rating in state %s", c.tag(),
+                        100 * load / c.param("rated_power"), state.name()), List.of(c.tag())));
+            }
+        }
+        Map<String, LineResult> lines = lineResults(eq, x, portFlowInto);
+        double pumpLoss = pumpInput - pumpHydraulic;
+        PowerBalance balance = new PowerBalance(pumpInput, pumpHydraulic, power.get(PowerKind.USEFUL),
+                power.get(PowerKind.RELIEF), power.get(PowerKind.THROTTLE), power.get(PowerKind.LINE),
+                power.get(PowerKind.LEAKAGE), power.get(PowerKind.VALVE), power.get(PowerKind.ACTUATOR), pumpLoss);
+        for (Map.Entry<String, ComponentResult> e : comps.entrySet()) {
+            Double abs = e.getValue().values().get("inlet_pressure_abs_pa");
+            if (abs != null && abs < 0.8e5) {
+                diagnostics.add(new Diagnostic(Severity.WARNING, String.format(java.util.Locale.ROOT,
+                        "pump %s inlet is at %.2f bar absolute, below about 0.8 bar (common practice): risk of cavitation",
+                        e.getKey(), abs / 1e5), List.of(e.getKey())));
+            }
+        }
+        return new Solution(state.name(), true, iterations, diagnostics, comps, lines, balance);
+    }
+
+    private void extras(Component c, Map<String, PortResult> ports, Map<String, Double> values, Report rep) {
+        switch (c.type()) {
+            case DOUBLE_ACTING_CYLINDER, SINGLE_ACTING_CYLINDER, DOUBLE_ROD_CYLINDER -> {
+                double v = values.get("velocity_mps");
+                if (Math.abs(v) > 1e-9) {
+                    values.put("stroke_time_s", c.param("stroke") / Math.abs(v));
+                }
+            }
+            case ACCUMULATOR -> {
+                double p1 = ports.get("P").pressure() + ATMOSPHERE;
+                double p0 = c.param("precharge") + ATMOSPHERE;
+                double v0 = c.param("volume");
+                double isoGas = p1 > p0 ? v0 * p0 / p1 : v0;
+                double adGas = p1 > p0 ? v0 * Math.pow(p0 / p1, 1 / 1.4) : v0;
+                values.put("stored_volume_isothermal_m3", v0 - isoGas);
+                values.put("stored_volume_adiabatic_m3", v0 - adGas);
+                values.put("gas_energy_isothermal_j", p1 > p0 ? p0 * v0 * Math.log(p1 / p0) : 0);
+                values.put("gas_energy_adiabatic_j", p1 > p0 ? (p1 * adGas - p0 * v0) / 0.4 : 0);
+            }
+            case PRESSURE_GAUGE -> values.put("pressure_pa", ports.get("P").pressure());
+            case ORIFICE, THROTTLE, FILTER, COOLER, CHECK_VALVE, PILOT_CHECK_VALVE, SEQUENCE_VALVE, REDUCING_VALVE,
+                    COUNTERBALANCE_VALVE, FLOW_METER -> {
+                double w = 0;
+                for (double v : rep.power.values()) {
+                    w += v;
+                }
+                values.putIfAbsent("power_loss_w", w);
+                String in = c.type().ports().get(0).name();
+                values.putIfAbsent("flow_m3s", ports.get(in).flow());
+            }
+            case DIRECTIONAL_2_2, DIRECTIONAL_3_2, DIRECTIONAL_4_2, DIRECTIONAL_4_3 -> {
+                double w = 0;
+                for (double v : rep.power.values()) {
+                    w += v;
+                }
+                values.put("power_loss_w", w);
+            }
+            default -> {
+            }
+        }
+    }
+
+    private Map<String, LineResult> lineResults(CircuitEquations eq, double[] x, Map<NetNode, Double> portFlowInto) {
+        Circuit circuit = eq.circuit;
+        Map<String, Double> idealFlows = IdealLineFlows.compute(eq, x, portFlowInto);
+        Map<String, LineResult> out = new LinkedHashMap<>();
+        double nu = eq.fluid.kinematicViscosity();
+        for (Line l : circuit.lines()) {
+            if (l.kind() == LineKind.SHAFT) {
+                continue;
+            }
+            int a = eq.node(l.from());
+            int b = eq.node(l.to());
+            double pa = a < 0 ? 0 : x[a];
+            double pb = b < 0 ? 0 : x[b];
+            double q = l.ideal() ? idealFlows.getOrDefault(l.id(), 0.0) : eq.lineBranches.get(l.id()).flow(x);
+            double area = Math.PI * l.diameter() * l.diameter() / 4;
+            double v = area > 0 ? q / area : 0;
+            double re = l.diameter() > 0 ? Math.abs(v) * l.diameter() / nu : 0;
+            out.put(l.id(), new LineResult(l.id(), q, pa, pb, v, re, l.ideal() ? 0 : q * (pa - pb)));
+        }
+        return out;
+    }
+}

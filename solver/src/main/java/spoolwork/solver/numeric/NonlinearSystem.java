@@ -1,0 +1,24 @@
+package spoolwork.solver.numeric;
+
+/**
+ * A square system F(x) = 0 with an analytic Jacobian, in physical units. Scales say what size a unit
+ * of each unknown and of each row has, so that Newton can work on numbers near one.
+ */
+public interface NonlinearSystem {
+    int size();
+
+    /** Evaluates F(x) into f (overwritten); adds Jacobian entries into j when j is not null. */
+    void evaluate(double[] x, double[] f, Jacobian j);
+
+    /** Typical magnitude of unknown i, in its own unit. */
+    double unknownScale(int i);
+
+    /** Tolerance of row i in its own unit: the row is satisfied when |F[i]| is at most this. */
+    double rowTolerance(int i);
+
+    /** Typical magnitude of row i, in its own unit, used to weigh rows against each other. */
+    double rowScale(int i);
+
+    /** True when unknown i is a pressure, whose Newton steps are limited. */
+    boolean isPressure(int i);
+}
