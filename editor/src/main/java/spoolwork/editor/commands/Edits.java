@@ -200,16 +200,95 @@ public final class Edits {
         return r.build();
     }
 
-    /** Turns each selected component a quarter turn clockwise about its own origin. */
+    /**
+     * Turns the selection a quarter turn clockwise on the sheet: one component about its own origin, several
+     * items together about the grid point nearest the middle of the selection, lines among them with them.
+     */
     public Command rotate(Collection<String> ids) {
         Set<String> set = new LinkedHashSet<>(ids);
-        return new Command("Rotate " + count(set), c -> transformed(c, set, comp -> comp.withRotation(comp.rotation() + 90)));
+        return new Command("Rotate " + count(set), c -> turned(c, set, true));
     }
 
-    /** Mirrors each selected component about its own vertical axis. */
+    /** Mirrors the selection left to right on the sheet, as {@link #rotate} does for turning. */
     public Command mirror(Collection<String> ids) {
         Set<String> set = new LinkedHashSet<>(ids);
-        return new Command("Mirror " + count(set), c -> transformed(c, set, comp -> comp.withMirrored(!comp.mirrored())));
+        return new Command("Mirror " + count(set), c -> turned(c, set, false));
+    }
+
+    private static Component turn(Component k, boolean rotate) {
+        // A component mirrors about its own vertical axis before it is rotated, so mirroring what is on the
+        // sheet left to right also reverses the rotation.
+        return rotate ? k.withRotation(k.rotation() + 90) : k.withMirrored(!k.mirrored()).withRotation(-k.rotation());
+    }
+
+    private Circuit turned(Circuit c, Set<String> ids, boolean rotate) {
+        List<String> movable = new ArrayList<>();
+        Box box = null;
+        for (String id : ids) {
+            Box b = null;
+            if (c.component(id).isPresent()) {
+                Component k = c.component(id).get();
+                b = new Box(k.x(), k.y(), k.x(), k.y());
+            } else if (c.junction(id).isPresent()) {
+                Junction j = c.junction(id).get();
+                b = new Box(j.x(), j.y(), j.x(), j.y());
+            } else if (c.note(id).isPresent()) {
+                Note n = c.note(id).get();
+                b = new Box(n.x(), n.y(), n.x(), n.y());
+            }
+            if (b != null) {
+                movable.add(id);
+                box = box == null ? b : box.union(b);
+            }
+        }
+        if (movable.size() <= 1) {
+            return transformed(c, ids, k -> turn(k, rotate));
+        }
+        double cx = Math.round(box.centre().x());
+        double cy = Math.round(box.centre().y());
+        java.util.function.UnaryOperator<Point> map = p -> rotate
+                ? new Point(cx - (p.y() - cy), cy + (p.x() - cx))
+                : new Point(2 * cx - p.x(), p.y());
+        Draft d = new Draft(c);
+        Set<String> owners = new HashSet<>();
+        for (String id : movable) {
+            Component k = d.components.get(id);
+            if (k != null) {
+                Point p = map.apply(new Point(k.x(), k.y()));
+                d.components.put(id, turn(k, rotate).at(p.x(), p.y()));
+                owners.add(id);
+                continue;
+            }
+            Junction j = d.junctions.get(id);
+            if (j != null) {
+                Point p = map.apply(new Point(j.x(), j.y()));
+                d.junctions.put(id, j.at(p.x(), p.y()));
+                owners.add(id);
+                continue;
+            }
+            Note n = d.notes.get(id);
+            Point p = map.apply(new Point(n.x(), n.y()));
+            d.notes.put(id, n.at(p.x(), p.y()));
+        }
+        Set<String> hanging = new HashSet<>();
+        for (Line l : c.lines()) {
+            boolean a = owners.contains(l.from().ownerId());
+            boolean b = owners.contains(l.to().ownerId());
+            if (a && b) {
+                List<Point> bends = new ArrayList<>();
+                l.bends().forEach(p -> bends.add(map.apply(p)));
+                d.lines.put(l.id(), l.withBends(bends));
+            } else if (a || b) {
+                hanging.add(l.id());
+            }
+        }
+        Circuit out = d.build();
+        Draft r = new Draft(out);
+        for (String id : hanging) {
+            Line l = out.line(id).orElseThrow();
+            r.lines.put(id, l.withBends(route(out, l, Set.of())));
+        }
+        return hanging.isEmpty() ? out : r.build();
     }
 
     private Circuit transformed(Circuit c, Set<String> ids, java.util.function.UnaryOperator<Component> f) {

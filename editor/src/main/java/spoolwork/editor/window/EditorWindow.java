@@ -115,13 +115,15 @@ public final class EditorWindow {
         root.setCenter(main);
         root.setBottom(statusBar());
 
-        Scene scene = new Scene(root, 1440, 900);
+        var screen = javafx.stage.Screen.getPrimary().getVisualBounds();
+        Scene scene = new Scene(root, Math.min(1440, screen.getWidth() * 0.94), Math.min(900, screen.getHeight() * 0.92));
         var css = EditorWindow.class.getResource("/spoolwork/editor/editor.css");
         if (css != null) {
             scene.getStylesheets().add(css.toExternalForm());
         }
         scene.getAccelerators().put(new KeyCodeCombination(KeyCode.Z, KeyCombination.SHORTCUT_DOWN, KeyCombination.SHIFT_DOWN),
                 () -> guarded(this::redo));
+        scene.getAccelerators().put(new KeyCodeCombination(KeyCode.BACK_SPACE), () -> guarded(this::delete));
         stage.setScene(scene);
         stage.titleProperty().bind(Bindings.createStringBinding(
                 () -> (doc.isDirty() ? "• " : "") + files.documentName() + " — Spoolwork",
@@ -133,6 +135,7 @@ public final class EditorWindow {
         });
         doc.revisionProperty().addListener((o, a, b) -> messages.check(doc.getCircuit()));
         messages.check(doc.getCircuit());
+        messages.setOnPick(place -> doc.getCircuit().componentByTag(place).ifPresent(k -> selection.set(List.of(k.id()))));
         settings.recentFiles().addListener((ListChangeListener<Path>) c -> rebuildRecent());
         rebuildRecent();
     }

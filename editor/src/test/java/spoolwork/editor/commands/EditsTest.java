@@ -206,4 +206,40 @@ class EditsTest {
         assertEquals(before.get(before.size() - 1), after.get(after.size() - 1));
         assertNotEquals(before, after);
     }
+
+    @Test
+    void aGroupTurnsAndMirrorsAsOneKeepingItsLinesAttached() {
+        String pump = place(ComponentType.FIXED_PUMP, 10, 30);
+        String tank = place(ComponentType.RESERVOIR, 10, 40);
+        String line = connect(Endpoint.port(tank, "S"), Endpoint.port(pump, "S"));
+        for (boolean rotate : new boolean[] {true, false}) {
+            Circuit before = doc.getCircuit();
+            assertTrue(doc.execute(rotate ? edits.rotate(List.of(pump, tank, line)) : edits.mirror(List.of(pump, tank, line))));
+            Circuit c = doc.getCircuit();
+            List<Point> pts = edits.polyline(c, c.line(line).orElseThrow());
+            assertEquals(edits.position(c, Endpoint.port(tank, "S")), pts.get(0));
+            assertEquals(edits.position(c, Endpoint.port(pump, "S")), pts.get(pts.size() - 1));
+            for (int i = 0; i + 1 < pts.size(); i++) {
+                assertTrue(pts.get(i).x() == pts.get(i + 1).x() || pts.get(i).y() == pts.get(i + 1).y());
+            }
+            // The drawn length of the line is unchanged: the group moved as a rigid piece.
+            List<Point> old = edits.polyline(before, before.line(line).orElseThrow());
+            assertEquals(length(old), length(pts), 1e-9);
+        }
+        // A turned pump keeps its pair: pump above tank becomes pump left of tank after a quarter turn.
+        Component p = doc.getCircuit().component(pump).orElseThrow();
+        Component t = doc.getCircuit().component(tank).orElseThrow();
+        assertEquals(p.y(), t.y());
+        // Mirroring a turned part left to right reverses its rotation.
+        assertTrue(p.mirrored());
+        assertEquals(270, p.rotation());
+    }
+
+    private static double length(List<Point> pts) {
+        double s = 0;
+        for (int i = 0; i + 1 < pts.size(); i++) {
+            s += Math.abs(pts.get(i + 1).x() - pts.get(i).x()) + Math.abs(pts.get(i + 1).y() - pts.get(i).y());
+        }
+        return s;
+    }
 }

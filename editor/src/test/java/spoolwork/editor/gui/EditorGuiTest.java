@@ -408,4 +408,48 @@ class EditorGuiTest {
         assertEquals(at.getX() + 60, moved.getX(), 1.5);
         assertEquals(at.getY() + 40, moved.getY(), 1.5);
     }
+
+    @Test
+    void aLineRunIsDraggedSidewaysAndAMessageLeadsToItsPart(FxRobot robot) {
+        String pump = placeWithPalette(robot, "fixed", ComponentType.FIXED_PUMP, 20, 50);
+        String valve = placeWithPalette(robot, "4/3", ComponentType.DIRECTIONAL_4_3, 40, 26);
+        drag(robot, port(pump, "P"), port(valve, "P"));
+        Line l = circuit().lines().iterator().next();
+        List<Point> before = window.edits().polyline(circuit(), l);
+        int seg = -1;
+        for (int i = 1; i + 2 < before.size(); i++) {
+            seg = i;
+        }
+        if (seg < 0) {
+            seg = 0;
+        }
+        Point a = before.get(seg);
+        Point b = before.get(seg + 1);
+        Point mid = new Point((a.x() + b.x()) / 2, (a.y() + b.y()) / 2);
+        boolean horizontal = a.y() == b.y();
+        long rev = window.document().getRevision();
+        drag(robot, mid, horizontal ? new Point(mid.x(), mid.y() - 3) : new Point(mid.x() + 3, mid.y()));
+        assertEquals(rev + 1, window.document().getRevision(), "one step for the dragged run");
+        List<Point> after = window.edits().polyline(circuit(), circuit().line(l.id()).orElseThrow());
+        assertEquals(before.get(0), after.get(0));
+        assertEquals(last(before), last(after));
+        assertTrue(after.stream().anyMatch(p -> horizontal ? p.y() == a.y() - 3 : p.x() == a.x() + 3), after.toString());
+
+        // The valve's open ports are listed; clicking the message selects the valve.
+        robot.interact(() -> window.selection().clear());
+        javafx.scene.control.ListView<?> list = robot.lookup("#messages-list").queryAs(javafx.scene.control.ListView.class);
+        int row = -1;
+        for (int i = 0; i < list.getItems().size(); i++) {
+            if (list.getItems().get(i).toString().startsWith("V1:")) {
+                row = i;
+            }
+        }
+        assertTrue(row >= 0, list.getItems().toString());
+        final int r = row;
+        robot.interact(() -> list.getSelectionModel().select(r));
+        javafx.scene.Node cell = robot.lookup(".list-cell").match(n -> ((javafx.scene.control.ListCell<?>) n).getIndex() == r)
+                .query();
+        robot.clickOn(cell);
+        assertEquals(List.of(valve), window.selection().ordered());
+    }
 }
