@@ -1241,7 +1241,7 @@ public final class SheetView extends Region {
     private boolean run(Command c) {
         try {
             return doc.execute(c);
-        } catch (ModelException ex) {
+        } catch (ModelException | IllegalArgumentException ex) {
             refused.accept(ex.getMessage());
             return false;
         }

@@ -354,7 +354,7 @@ public final class EditorWindow {
     private boolean run(Command c) {
         try {
             return doc.execute(c);
-        } catch (ModelException e) {
+        } catch (ModelException | IllegalArgumentException e) {
             refused(e.getMessage());
             return false;
         }

@@ -27,6 +27,7 @@ import org.testfx.framework.junit5.ApplicationExtension;
 import org.testfx.framework.junit5.Start;
 import org.testfx.util.WaitForAsyncUtils;
 
+import spoolwork.editor.commands.Edits;
 import spoolwork.editor.geometry.Box;
 import spoolwork.editor.inspector.UnitField;
 import spoolwork.editor.settings.EditorSettings;
@@ -407,6 +408,17 @@ class EditorGuiTest {
         Point2D moved = screen(30, 30);
         assertEquals(at.getX() + 60, moved.getX(), 1.5);
         assertEquals(at.getY() + 40, moved.getY(), 1.5);
+        // So does a drag with Space held, and it moves nothing on the drawing.
+        Circuit drawn = circuit();
+        robot.interact(() -> window.sheet().requestFocus());
+        jump(moved);
+        robot.press(KeyCode.SPACE).press(MouseButton.PRIMARY);
+        jump(moved.add(-30, 20));
+        robot.release(MouseButton.PRIMARY).release(KeyCode.SPACE);
+        Point2D again = screen(30, 30);
+        assertEquals(moved.getX() - 30, again.getX(), 1.5);
+        assertEquals(moved.getY() + 20, again.getY(), 1.5);
+        assertEquals(drawn, circuit());
     }
 
     @Test
@@ -451,5 +463,28 @@ class EditorGuiTest {
                 .query();
         robot.clickOn(cell);
         assertEquals(List.of(valve), window.selection().ordered());
+    }
+
+    @Test
+    void overlayEntriesFollowTheirComponentAndLineAndTheRevisionCountsChanges(FxRobot robot) {
+        String pump = placeWithPalette(robot, "fixed", ComponentType.FIXED_PUMP, 20, 40);
+        String tank = placeWithPalette(robot, "reservoir", ComponentType.RESERVOIR, 20, 54);
+        drag(robot, port(tank, "S"), port(pump, "S"));
+        String line = circuit().lines().iterator().next().id();
+        javafx.scene.text.Text atPump = new javafx.scene.text.Text("p = 120 bar");
+        javafx.scene.text.Text atLine = new javafx.scene.text.Text("q = 30 L/min");
+        var snap = window.document().snapshot();
+        robot.interact(() -> {
+            window.sheet().overlay().showAtComponent("P1", atPump);
+            window.sheet().overlay().showAtLine(line, atLine);
+            window.sheet().sync();
+        });
+        double x0 = atPump.getLayoutX();
+        assertTrue(atPump.isVisible() && atLine.isVisible());
+        robot.interact(() -> window.document().execute(window.edits().move(List.of(pump), 4, 0)));
+        assertEquals(x0 + 4 * spoolwork.editor.canvas.SheetView.PX, atPump.getLayoutX(), 1e-9, "the entry moves with P1");
+        assertTrue(window.document().getRevision() > snap.revision(), "a background result for the old snapshot is stale");
+        robot.interact(() -> window.document().execute(Edits.setTag(pump, "P7")));
+        assertFalse(atPump.isVisible(), "an entry for a tag no longer drawn is hidden");
     }
 }
