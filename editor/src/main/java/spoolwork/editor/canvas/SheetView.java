@@ -472,13 +472,32 @@ public final class SheetView extends Region {
 
     private Group componentNode(Component k) {
         Node sym = art.paint(k, PX);
-        Box b = geometry.bounds(k.at(0, 0));
+        Component at0 = k.at(0, 0);
+        Box b = geometry.bounds(at0);
         Text tag = new Text(k.tag());
         tag.getStyleClass().add("tag");
         tag.setFont(Font.font("SansSerif", FontWeight.BOLD, 1.2 * PX));
-        tag.setTextOrigin(VPos.BOTTOM);
-        tag.setX(b.maxX() * PX + 0.3 * PX);
-        tag.setY(b.minY() * PX + 0.2 * PX);
+        // The tag goes to the corner of the symbol farthest from its ports, where lines are least likely to run.
+        double[][] corners = {{b.maxX(), b.minY()}, {b.minX(), b.minY()}, {b.maxX(), b.maxY()}, {b.minX(), b.maxY()}};
+        int best = 0;
+        double bestD = -1;
+        for (int i = 0; i < corners.length; i++) {
+            double d = Double.MAX_VALUE;
+            for (PortSpec ps : k.type().ports()) {
+                Point p = geometry.port(at0, ps.name());
+                d = Math.min(d, Math.hypot(p.x() - corners[i][0], p.y() - corners[i][1]));
+            }
+            if (d > bestD + 1e-9) {
+                bestD = d;
+                best = i;
+            }
+        }
+        boolean right = best == 0 || best == 2;
+        boolean top = best < 2;
+        tag.setTextOrigin(top ? VPos.BOTTOM : VPos.TOP);
+        double w = tag.getLayoutBounds().getWidth();
+        tag.setX(right ? corners[best][0] * PX + 0.3 * PX : corners[best][0] * PX - 0.3 * PX - w);
+        tag.setY(top ? corners[best][1] * PX + 0.2 * PX : corners[best][1] * PX - 0.2 * PX);
         Group g = new Group(sym, tag);
         g.getStyleClass().add("component");
         g.setLayoutX(k.x() * PX);

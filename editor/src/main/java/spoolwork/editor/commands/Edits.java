@@ -157,24 +157,24 @@ public final class Edits {
      * quick route instead of a clear one (the live preview of a drag).
      */
     public Circuit moved(Circuit c, Set<String> ids, double dx, double dy, boolean routeCarefully) {
-        Circuit out = c;
+        Draft d = new Draft(c);
         Set<String> owners = new HashSet<>();
         for (String id : ids) {
-            var comp = out.component(id);
-            if (comp.isPresent()) {
-                out = out.withComponent(comp.get().at(comp.get().x() + dx, comp.get().y() + dy));
+            Component comp = d.components.get(id);
+            if (comp != null) {
+                d.components.put(id, comp.at(comp.x() + dx, comp.y() + dy));
                 owners.add(id);
                 continue;
             }
-            var j = out.junction(id);
-            if (j.isPresent()) {
-                out = out.withJunction(j.get().at(j.get().x() + dx, j.get().y() + dy));
+            Junction j = d.junctions.get(id);
+            if (j != null) {
+                d.junctions.put(id, j.at(j.x() + dx, j.y() + dy));
                 owners.add(id);
                 continue;
             }
-            var n = out.note(id);
-            if (n.isPresent()) {
-                out = out.withNote(n.get().at(n.get().x() + dx, n.get().y() + dy));
+            Note n = d.notes.get(id);
+            if (n != null) {
+                d.notes.put(id, n.at(n.x() + dx, n.y() + dy));
             }
         }
         List<Line> rerouted = new ArrayList<>();
@@ -184,51 +184,137 @@ public final class Edits {
             if (a && b) {
                 List<Point> bends = new ArrayList<>();
                 l.bends().forEach(p -> bends.add(new Point(p.x() + dx, p.y() + dy)));
-                out = out.withLine(l.withBends(bends));
+                d.lines.put(l.id(), l.withBends(bends));
             } else if (a || b) {
                 rerouted.add(l);
             }
         }
-        for (Line l : rerouted) {
-            out = out.withLine(l.withBends(routeCarefully ? route(out, l, Set.of()) : quickRoute(out, l)));
+        Circuit out = d.build();
+        if (rerouted.isEmpty()) {
+            return out;
         }
-        return out;
+        Draft r = new Draft(out);
+        for (Line l : rerouted) {
+            r.lines.put(l.id(), l.withBends(routeCarefully ? route(out, l, Set.of()) : quickRoute(out, l)));
+        }
+        return r.build();
     }
 
-    /** Turns each selected component a quarter turn clockwise about its own origin. */
+    /**
+     * Turns the selection a quarter turn clockwise on the sheet: one component about its own origin, several
+     * items together about the grid point nearest the middle of the selection, lines among them with them.
+     */
     public Command rotate(Collection<String> ids) {
         Set<String> set = new LinkedHashSet<>(ids);
-        return new Command("Rotate " + count(set), c -> transformed(c, set, comp -> comp.withRotation(comp.rotation() + 90)));
+        return new Command("Rotate " + count(set), c -> turned(c, set, true));
     }
 
-    /** Mirrors each selected component about its own vertical axis. */
+    /** Mirrors the selection left to right on the sheet, as {@link #rotate} does for turning. */
     public Command mirror(Collection<String> ids) {
         Set<String> set = new LinkedHashSet<>(ids);
-        return new Command("Mirror " + count(set), c -> transformed(c, set, comp -> comp.withMirrored(!comp.mirrored())));
+        return new Command("Mirror " + count(set), c -> turned(c, set, false));
+    }
+
+    private static Component turn(Component k, boolean rotate) {
+        // A component mirrors about its own vertical axis before it is rotated, so mirroring what is on the
+        // sheet left to right also reverses the rotation.
+        return rotate ? k.withRotation(k.rotation() + 90) : k.withMirrored(!k.mirrored()).withRotation(-k.rotation());
+    }
+
+    private Circuit turned(Circuit c, Set<String> ids, boolean rotate) {
+        List<String> movable = new ArrayList<>();
+        Box box = null;
+        for (String id : ids) {
+            Box b = null;
+            if (c.component(id).isPresent()) {
+                Component k = c.component(id).get();
+                b = new Box(k.x(), k.y(), k.x(), k.y());
+            } else if (c.junction(id).isPresent()) {
+                Junction j = c.junction(id).get();
+                b = new Box(j.x(), j.y(), j.x(), j.y());
+            } else if (c.note(id).isPresent()) {
+                Note n = c.note(id).get();
+                b = new Box(n.x(), n.y(), n.x(), n.y());
+            }
+            if (b != null) {
+                movable.add(id);
+                box = box == null ? b : box.union(b);
+            }
+        }
+        if (movable.size() <= 1) {
+            return transformed(c, ids, k -> turn(k, rotate));
+        }
+        double cx = Math.round(box.centre().x());
+        double cy = Math.round(box.centre().y());
+        java.util.function.UnaryOperator<Point> map = p -> rotate
+                ? new Point(cx - (p.y() - cy), cy + (p.x() - cx))
+                : new Point(2 * cx - p.x(), p.y());
+        Draft d = new Draft(c);
+        Set<String> owners = new HashSet<>();
+        for (String id : movable) {
+            Component k = d.components.get(id);
+            if (k != null) {
+                Point p = map.apply(new Point(k.x(), k.y()));
+                d.components.put(id, turn(k, rotate).at(p.x(), p.y()));
+                owners.add(id);
+                continue;
+            }
+            Junction j = d.junctions.get(id);
+            if (j != null) {
+                Point p = map.apply(new Point(j.x(), j.y()));
+                d.junctions.put(id, j.at(p.x(), p.y()));
+                owners.add(id);
+                continue;
+            }
+            Note n = d.notes.get(id);
+            Point p = map.apply(new Point(n.x(), n.y()));
+            d.notes.put(id, n.at(p.x(), p.y()));
+        }
+        Set<String> hanging = new HashSet<>();
+        for (Line l : c.lines()) {
+            boolean a = owners.contains(l.from().ownerId());
+            boolean b = owners.contains(l.to().ownerId());
+            if (a && b) {
+                List<Point> bends = new ArrayList<>();
+                l.bends().forEach(p -> bends.add(map.apply(p)));
+                d.lines.put(l.id(), l.withBends(bends));
+            } else if (a || b) {
+                hanging.add(l.id());
+            }
+        }
+        Circuit out = d.build();
+        Draft r = new Draft(out);
+        for (String id : hanging) {
+            Line l = out.line(id).orElseThrow();
+            r.lines.put(id, l.withBends(route(out, l, Set.of())));
+        }
+        return hanging.isEmpty() ? out : r.build();
     }
 
     private Circuit transformed(Circuit c, Set<String> ids, java.util.function.UnaryOperator<Component> f) {
-        Circuit out = c;
+        Draft d = new Draft(c);
         Set<String> changed = new HashSet<>();
         for (String id : ids) {
-            var comp = out.component(id);
-            if (comp.isPresent()) {
-                out = out.withComponent(f.apply(comp.get()));
+            Component comp = d.components.get(id);
+            if (comp != null) {
+                d.components.put(id, f.apply(comp));
                 changed.add(id);
             }
         }
-        return rerouteAt(out, changed);
+        return rerouteAt(d.build(), changed);
     }
 
     /** Routes every line with an end on one of the owners again. */
     public Circuit rerouteAt(Circuit c, Set<String> owners) {
-        Circuit out = c;
+        Draft d = new Draft(c);
+        boolean any = false;
         for (Line l : c.lines()) {
             if (owners.contains(l.from().ownerId()) || owners.contains(l.to().ownerId())) {
-                out = out.withLine(l.withBends(route(out, l, Set.of())));
+                d.lines.put(l.id(), l.withBends(route(c, l, Set.of())));
+                any = true;
             }
         }
-        return out;
+        return any ? d.build() : c;
     }
 
     /** Routes the given line again, dropping its bends. */
@@ -289,19 +375,27 @@ public final class Edits {
     public Command delete(Collection<String> ids) {
         Set<String> set = new LinkedHashSet<>(ids);
         return new Command("Delete " + count(set), c -> {
-            Circuit out = c;
+            Draft d = new Draft(c);
+            Set<String> gone = new HashSet<>();
             for (String id : set) {
-                if (out.component(id).isPresent()) {
-                    out = out.withoutComponent(id);
-                } else if (out.junction(id).isPresent()) {
-                    out = out.withoutJunction(id);
-                } else if (out.line(id).isPresent()) {
-                    out = out.withoutLine(id);
-                } else if (out.note(id).isPresent()) {
-                    out = out.withoutNote(id);
+                if (d.components.remove(id) != null || d.junctions.remove(id) != null) {
+                    gone.add(id);
+                } else if (d.lines.remove(id) == null) {
+                    d.notes.remove(id);
                 }
             }
-            return tidyJunctions(out);
+            d.lines.values().removeIf(l -> gone.contains(l.from().ownerId()) || gone.contains(l.to().ownerId()));
+            // Operating states must not name what is gone.
+            List<spoolwork.model.OperatingState> states = new ArrayList<>();
+            for (spoolwork.model.OperatingState s : c.states()) {
+                spoolwork.model.OperatingState t = s;
+                for (String id : gone) {
+                    t = t.without(id);
+                }
+                states.add(t);
+            }
+            d.states = states;
+            return tidyJunctions(d.build());
         });
     }
 
@@ -406,31 +500,43 @@ public final class Edits {
         holder[0] = new Paste(new Command(description, c -> {
             holder[0].newIds.clear();
             Map<String, String> ids = new HashMap<>();
-            Circuit out = c;
+            Draft d = new Draft(c);
+            Set<String> tags = new HashSet<>();
+            d.components.values().forEach(k -> tags.add(k.tag()));
             for (Component k : fragment.components()) {
-                String id = out.freshId("c");
-                String tag = out.componentByTag(k.tag()).isPresent() ? out.freshTag(k.type()) : k.tag();
-                out = out.withComponent(k.withId(id).withTag(tag).at(k.x() + dx, k.y() + dy));
+                String id = d.freshId("c");
+                String tag = k.tag();
+                if (tags.contains(tag)) {
+                    for (int i = 1; ; i++) {
+                        tag = k.type().tagPrefix() + i;
+                        if (!tags.contains(tag)) {
+                            break;
+                        }
+                    }
+                }
+                tags.add(tag);
+                d.components.put(id, k.withId(id).withTag(tag).at(k.x() + dx, k.y() + dy));
                 ids.put(k.id(), id);
             }
             for (Junction j : fragment.junctions()) {
-                String id = out.freshId("j");
-                out = out.withJunction(new Junction(id, j.x() + dx, j.y() + dy));
+                String id = d.freshId("j");
+                d.junctions.put(id, new Junction(id, j.x() + dx, j.y() + dy));
                 ids.put(j.id(), id);
             }
             for (Note n : fragment.notes()) {
-                String id = out.freshId("n");
-                out = out.withNote(new Note(id, n.x() + dx, n.y() + dy, n.text()));
+                String id = d.freshId("n");
+                d.notes.put(id, new Note(id, n.x() + dx, n.y() + dy, n.text()));
                 ids.put(n.id(), id);
             }
             for (Line l : fragment.lines()) {
-                String id = out.freshId("l");
+                String id = d.freshId("l");
                 List<Point> bends = new ArrayList<>();
                 l.bends().forEach(p -> bends.add(new Point(p.x() + dx, p.y() + dy)));
-                out = out.withLine(new Line(id, remap(l.from(), ids), remap(l.to(), ids), bends, l.diameter(),
+                d.lines.put(id, new Line(id, remap(l.from(), ids), remap(l.to(), ids), bends, l.diameter(),
                         l.length(), l.kind(), l.ideal()));
                 ids.put(l.id(), id);
             }
+            Circuit out = d.build();
             holder[0].newIds.addAll(ids.values());
             return out;
         }));
@@ -530,7 +636,27 @@ public final class Edits {
                 obstacles.add(geometry.bounds(k));
             }
         }
-        return Router.route(end(c, l.from()), end(c, l.to()), obstacles);
+        List<List<Point>> others = new ArrayList<>();
+        Box window = Box.around(position(c, l.from()).x(), position(c, l.from()).y(),
+                position(c, l.to()).x(), position(c, l.to()).y()).grow(12);
+        for (Line o : c.lines()) {
+            if (!o.id().equals(l.id())) {
+                List<Point> pts = polyline(c, o);
+                if (pts.stream().anyMatch(p -> window.contains(p.x(), p.y())) || crosses(pts, window)) {
+                    others.add(pts);
+                }
+            }
+        }
+        return Router.route(end(c, l.from()), end(c, l.to()), obstacles, others);
+    }
+
+    private static boolean crosses(List<Point> pts, Box b) {
+        for (int i = 0; i + 1 < pts.size(); i++) {
+            if (Box.around(pts.get(i).x(), pts.get(i).y(), pts.get(i + 1).x(), pts.get(i + 1).y()).intersects(b)) {
+                return true;
+            }
+        }
+        return false;
     }
 
     public List<Point> quickRoute(Circuit c, Line l) {

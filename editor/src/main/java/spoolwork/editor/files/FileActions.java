@@ -68,6 +68,11 @@ public final class FileActions {
 
     /** Opens a recent file, asking first about unsaved work. */
     public boolean openRecent(Path file) {
+        if (!java.nio.file.Files.exists(file)) {
+            settings.forget(file);
+            notice.accept("Could not open " + file.getFileName() + ": the file is no longer there");
+            return false;
+        }
         return confirmDiscard() && load(file);
     }
 

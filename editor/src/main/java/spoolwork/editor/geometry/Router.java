@@ -3,22 +3,21 @@ package spoolwork.editor.geometry;
 import java.util.ArrayList;
 import java.util.List;
 
-import org.jgrapht.GraphPath;
-import org.jgrapht.alg.shortestpath.AStarShortestPath;
-import org.jgrapht.graph.DefaultUndirectedWeightedGraph;
-import org.jgrapht.graph.DefaultWeightedEdge;
-
 import spoolwork.model.Point;
 
 /**
  * Orthogonal routing of a line on the sheet's grid, around symbol outlines. The search runs over grid
  * points in a window around the two ends, each point taken twice (travelling across or along) so that a
- * change of direction can carry a cost: the shortest path is then short and has few bends.
+ * change of direction can carry a cost: the shortest path is then short and has few bends. The search is
+ * a plain A* over arrays rather than a general graph library, because it runs on every release of a drag
+ * and must stay well under a frame.
  * Coordinates are grid units.
  */
 public final class Router {
     /** Cost of one bend, in grid units of length: a bend is worth this much extra run. */
     static final double BEND_COST = 4;
+    /** Extra cost per grid step of running along another line. */
+    static final int OVERLAP_COST = 6;
     private static final int MARGIN = 6;
     private static final int MAX_CELLS = 90_000;
 
@@ -37,6 +36,15 @@ public final class Router {
      * falls back to {@link #quick} when no clear route exists within the search window.
      */
     public static List<Point> route(End from, End to, List<Box> obstacles) {
+        return route(from, to, obstacles, List.of());
+    }
+
+    /**
+     * As {@link #route(End, End, List)}, and keeping off the runs of other lines where it can: running along
+     * another line costs {@link #OVERLAP_COST} per grid step, so lines share a run only when there is no
+     * other way, and a crossing costs nothing extra.
+     */
+    public static List<Point> route(End from, End to, List<Box> obstacles, List<List<Point>> others) {
         Point a = snap(from.stub());
         Point b = snap(to.stub());
         int ox = (int) Math.min(a.x(), b.x()) - MARGIN;
@@ -63,57 +71,21 @@ public final class Router {
         int ib = index(b, ox, oy, w);
         blocked[ia] = false;
         blocked[ib] = false;
-
-        DefaultUndirectedWeightedGraph<Integer, DefaultWeightedEdge> g =
-                new DefaultUndirectedWeightedGraph<>(DefaultWeightedEdge.class);
-        for (int i = 0; i < w * h; i++) {
-            if (!blocked[i]) {
-                g.addVertex(2 * i);
-                g.addVertex(2 * i + 1);
-                edge(g, 2 * i, 2 * i + 1, BEND_COST);
+        boolean[] alongX = new boolean[w * h];
+        boolean[] alongY = new boolean[w * h];
+        for (List<Point> line : others) {
+            for (int i = 0; i + 1 < line.size(); i++) {
+                mark(line.get(i), line.get(i + 1), ox, oy, w, h, alongX, alongY);
             }
         }
-        for (int y = 0; y < h; y++) {
-            for (int x = 0; x < w; x++) {
-                int i = y * w + x;
-                if (blocked[i]) {
-                    continue;
-                }
-                if (x + 1 < w && !blocked[i + 1]) {
-                    edge(g, 2 * i, 2 * (i + 1), 1);
-                }
-                if (y + 1 < h && !blocked[i + w]) {
-                    edge(g, 2 * i + 1, 2 * (i + w) + 1, 1);
-                }
-            }
-        }
-        int source = -1;
-        int sink = -2;
-        g.addVertex(source);
-        g.addVertex(sink);
-        attach(g, source, ia, from.exit());
-        attach(g, sink, ib, to.exit());
-        final int width = w;
-        AStarShortestPath<Integer, DefaultWeightedEdge> astar = new AStarShortestPath<>(g, (u, v) -> {
-            if (u < 0 || v < 0) {
-                return 0;
-            }
-            int cu = u / 2;
-            int cv = v / 2;
-            return Math.abs(cu % width - cv % width) + Math.abs(cu / width - cv / width);
-        });
-        GraphPath<Integer, DefaultWeightedEdge> path = astar.getPath(source, sink);
-        if (path == null) {
+        int[] cells = search(blocked, alongX, alongY, w, h, ia, ib, from.exit(), to.exit());
+        if (cells == null) {
             return quick(from, to);
         }
         List<Point> pts = new ArrayList<>();
         pts.add(from.at());
-        for (int v : path.getVertexList()) {
-            if (v < 0) {
-                continue;
-            }
-            int c = v / 2;
-            pts.add(new Point(c % w + ox, c / w + oy));
+        for (int cell : cells) {
+            pts.add(new Point(cell % w + ox, cell / w + oy));
         }
         pts.add(to.at());
         return inner(simplify(pts));
@@ -206,18 +178,126 @@ public final class Router {
         return ((int) p.y() - oy) * w + ((int) p.x() - ox);
     }
 
-    private static void edge(DefaultUndirectedWeightedGraph<Integer, DefaultWeightedEdge> g, int u, int v, double wgt) {
-        DefaultWeightedEdge e = g.addEdge(u, v);
-        if (e != null) {
-            g.setEdgeWeight(e, wgt);
+    /**
+     * A* over (grid point, travel axis) states: a step along the axis costs 1, a change of axis
+     * {@link #BEND_COST}. Returns the cells of the cheapest path from a to b, or null when b cannot be reached.
+     */
+    private static void mark(Point p, Point q, int ox, int oy, int w, int h, boolean[] alongX, boolean[] alongY) {
+        boolean horizontal = Math.abs(p.y() - q.y()) < 1e-9;
+        boolean vertical = Math.abs(p.x() - q.x()) < 1e-9;
+        if (!horizontal && !vertical) {
+            return;
+        }
+        int x0 = (int) Math.round(Math.min(p.x(), q.x())) - ox;
+        int x1 = (int) Math.round(Math.max(p.x(), q.x())) - ox;
+        int y0 = (int) Math.round(Math.min(p.y(), q.y())) - oy;
+        int y1 = (int) Math.round(Math.max(p.y(), q.y())) - oy;
+        for (int x = Math.max(0, x0); x <= Math.min(w - 1, x1); x++) {
+            for (int y = Math.max(0, y0); y <= Math.min(h - 1, y1); y++) {
+                if (horizontal) {
+                    alongX[y * w + x] = true;
+                } else {
+                    alongY[y * w + x] = true;
+                }
+            }
         }
     }
 
-    private static void attach(DefaultUndirectedWeightedGraph<Integer, DefaultWeightedEdge> g, int terminal, int cell,
-                               Point exit) {
-        boolean horizontal = exit != null && exit.y() == 0;
-        boolean vertical = exit != null && exit.x() == 0;
-        edge(g, terminal, 2 * cell, vertical ? BEND_COST : 0);
-        edge(g, terminal, 2 * cell + 1, horizontal ? BEND_COST : 0);
+    private static int[] search(boolean[] blocked, boolean[] alongX, boolean[] alongY, int w, int h, int a, int b,
+                                Point exitA, Point exitB) {
+        int n = w * h * 2;
+        int[] g = new int[n];
+        int[] parent = new int[n];
+        java.util.Arrays.fill(g, Integer.MAX_VALUE);
+        java.util.PriorityQueue<long[]> open = new java.util.PriorityQueue<>((x, y) -> Long.compare(x[0], y[0]));
+        int bx = b % w;
+        int by = b / w;
+        int bend = (int) BEND_COST;
+        for (int d = 0; d < 2; d++) {
+            int s = 2 * a + d;
+            g[s] = axisCost(exitA, d, bend);
+            parent[s] = -1;
+            open.add(new long[] {g[s] + manhattan(a, bx, by, w), s});
+        }
+        int best = Integer.MAX_VALUE;
+        int bestState = -1;
+        while (!open.isEmpty()) {
+            long[] top = open.poll();
+            int s = (int) top[1];
+            if (top[0] >= best) {
+                break;
+            }
+            int cost = g[s];
+            if (top[0] > cost + manhattan(s / 2, bx, by, w)) {
+                continue;
+            }
+            int cell = s / 2;
+            int d = s % 2;
+            if (cell == b) {
+                int total = cost + axisCost(exitB, d, bend);
+                if (total < best) {
+                    best = total;
+                    bestState = s;
+                }
+                continue;
+            }
+            relax(open, g, parent, s, 2 * cell + (1 - d), cost + bend, bx, by, w);
+            int x = cell % w;
+            int y = cell / w;
+            if (d == 0) {
+                if (x > 0 && !blocked[cell - 1]) {
+                    relax(open, g, parent, s, 2 * (cell - 1), cost + step(alongX, cell, cell - 1), bx, by, w);
+                }
+                if (x + 1 < w && !blocked[cell + 1]) {
+                    relax(open, g, parent, s, 2 * (cell + 1), cost + step(alongX, cell, cell + 1), bx, by, w);
+                }
+            } else {
+                if (y > 0 && !blocked[cell - w]) {
+                    relax(open, g, parent, s, 2 * (cell - w) + 1, cost + step(alongY, cell, cell - w), bx, by, w);
+                }
+                if (y + 1 < h && !blocked[cell + w]) {
+                    relax(open, g, parent, s, 2 * (cell + w) + 1, cost + step(alongY, cell, cell + w), bx, by, w);
+                }
+            }
+        }
+        if (bestState < 0) {
+            return null;
+        }
+        List<Integer> out = new ArrayList<>();
+        for (int s = bestState; s >= 0; s = parent[s]) {
+            int cell = s / 2;
+            if (out.isEmpty() || out.get(out.size() - 1) != cell) {
+                out.add(cell);
+            }
+        }
+        java.util.Collections.reverse(out);
+        return out.stream().mapToInt(Integer::intValue).toArray();
+    }
+
+    /** One grid step, dearer when both cells lie on a run of another line along the same axis. */
+    private static int step(boolean[] along, int from, int to) {
+        return along[from] && along[to] ? 1 + OVERLAP_COST : 1;
+    }
+
+    private static void relax(java.util.PriorityQueue<long[]> open, int[] g, int[] parent, int from, int to, int cost,
+                              int bx, int by, int w) {
+        if (cost < g[to]) {
+            g[to] = cost;
+            parent[to] = from;
+            open.add(new long[] {cost + manhattan(to / 2, bx, by, w), to});
+        }
+    }
+
+    private static int manhattan(int cell, int bx, int by, int w) {
+        return Math.abs(cell % w - bx) + Math.abs(cell / w - by);
+    }
+
+    /** Cost of travelling along axis d (0 across, 1 along y) at an end that must leave in the exit direction. */
+    private static int axisCost(Point exit, int d, int bend) {
+        if (exit == null) {
+            return 0;
+        }
+        boolean horizontal = exit.y() == 0;
+        return (d == 0) == horizontal ? 0 : bend;
     }
 }

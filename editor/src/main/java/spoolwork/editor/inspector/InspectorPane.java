@@ -168,6 +168,15 @@ public final class InspectorPane extends VBox {
                 tag.getStyleClass().add("invalid");
             }
         });
+        tag.setOnKeyPressed(e -> {
+            if (e.getCode() == javafx.scene.input.KeyCode.ESCAPE) {
+                tag.setText(k.tag());
+                tagError.setVisible(false);
+                tagError.setManaged(false);
+                tag.getStyleClass().remove("invalid");
+                e.consume();
+            }
+        });
         tag.focusedProperty().addListener((o, was, now) -> {
             if (!now && tag.getScene() != null) {
                 tag.getOnAction().handle(null);
@@ -318,7 +327,11 @@ public final class InspectorPane extends VBox {
             d.textField().setId("line-diameter");
             addRow(g, row++, "Inner diameter", d, "bore of the pipe or hose, for the pressure loss.\n"
                     + "Typical velocities: suction 0.6–1.2 m/s, return 2–4 m/s, pressure 2–6 m/s (common practice).");
-            UnitField len = valueField(Quantity.LENGTH, l.length(), 1e-6, Line.MAX_LENGTH,
+            // A run of pipe is read in metres or feet, not in the millimetres or inches of a bore.
+            UnitSystem sys = settings.getUnitSystem();
+            spoolwork.model.units.Unit runUnit = Units.find(Quantity.LENGTH, sys == UnitSystem.US ? "ft" : "m").orElseThrow();
+            UnitField len = new UnitField(Quantity.LENGTH, runUnit, l.length(), si -> si > 0 && si <= Line.MAX_LENGTH ? null
+                    : "must be above 0 and at most " + Units.format(Line.MAX_LENGTH, runUnit),
                     si -> run(Edits.changeLine(l.id(), x -> x.withSize(x.diameter(), si), "length")));
             len.textField().setId("line-length");
             addRow(g, row++, "Length", len, "run of the pipe or hose on the machine, for the pressure loss; "
@@ -334,14 +347,14 @@ public final class InspectorPane extends VBox {
 
     private String describe(Line l) {
         Circuit c = doc.getCircuit();
-        return "from " + endName(c, l.from()) + " to " + endName(c, l.to());
+        return "from " + endName(c, l.from()) + " to " + endName(c, l.to()) + "; drag one of its runs sideways to move it";
     }
 
     private static String endName(Circuit c, spoolwork.model.Endpoint e) {
         if (e instanceof spoolwork.model.Endpoint.PortRef p) {
             return c.component(p.componentId()).map(k -> k.tag() + "." + p.port()).orElse(p.toString());
         }
-        return "junction " + e.ownerId();
+        return "a junction";
     }
 
     private void showNote(Note n) {
@@ -398,6 +411,7 @@ public final class InspectorPane extends VBox {
         Label count = new Label(c.components().size() + " components, " + c.lines().size() + " lines, "
                 + c.junctions().size() + " junctions, " + c.notes().size() + " notes");
         count.getStyleClass().add("inspector-sub");
+        count.setWrapText(true);
         body.getChildren().add(count);
     }
 }

@@ -11,7 +11,7 @@ import spoolwork.model.ComponentType;
  */
 final class TypicalValues {
     private static final Map<String, String> BY_KEY = Map.ofEntries(
-            Map.entry("cracking_pressure", "industrial systems 70–250 bar, mobile 200–350 bar"),
+            Map.entry("cracking_pressure", "set above the highest working pressure; systems run at 70–250 bar industrial, 200–350 bar mobile"),
             Map.entry("setting", "below the system relief setting by 10–20 bar"),
             Map.entry("override", "5–15 % of the setting from cracking to rated flow"),
             Map.entry("volumetric_efficiency", "gear pumps 0.90–0.95, piston units 0.93–0.97"),
@@ -25,7 +25,7 @@ final class TypicalValues {
             Map.entry("clean_drop", "0.5–1.5 bar at rated flow"),
             Map.entry("bypass_cracking", "2–3.5 bar on a return filter, higher on a pressure filter"),
             Map.entry("leakage", "a few cm³/min per 100 bar per path"),
-            Map.entry("compensator_setting", "industrial systems 70–250 bar"),
+            Map.entry("compensator_setting", "the working pressure wanted, below the relief setting; industrial systems 70–250 bar"),
             Map.entry("discharge_coefficient", "sharp-edged orifice about 0.61"),
             Map.entry("reference_pressure", "the pressure of the pump's rating, often 200–250 bar"),
             Map.entry("volume", "reservoir about 3× the pump flow per minute"),

@@ -9,6 +9,7 @@ import javafx.scene.layout.VBox;
 
 import spoolwork.model.ModelException;
 import spoolwork.model.Quantity;
+import spoolwork.model.units.Unit;
 import spoolwork.model.units.UnitParseException;
 import spoolwork.model.units.UnitSystem;
 import spoolwork.model.units.Units;
@@ -28,7 +29,7 @@ public final class UnitField extends VBox {
     private final TextField field = new TextField();
     private final Label error = new Label();
     private final Quantity quantity;
-    private final UnitSystem system;
+    private final Unit display;
     private final Check check;
     private final DoubleConsumer commit;
     private double value;
@@ -39,8 +40,13 @@ public final class UnitField extends VBox {
      *               whose message is then shown as the error
      */
     public UnitField(Quantity quantity, UnitSystem system, double value, Check check, DoubleConsumer commit) {
+        this(quantity, Units.displayUnit(quantity, system), value, check, commit);
+    }
+
+    /** A field shown in the given unit; a bare number is taken in that unit too. */
+    public UnitField(Quantity quantity, Unit display, double value, Check check, DoubleConsumer commit) {
         this.quantity = quantity;
-        this.system = system;
+        this.display = display;
         this.check = check;
         this.commit = commit;
         this.value = value;
@@ -80,7 +86,7 @@ public final class UnitField extends VBox {
     }
 
     private String show(double si) {
-        return Units.format(si, quantity, system);
+        return Units.format(si, display);
     }
 
     private void apply() {
@@ -91,7 +97,7 @@ public final class UnitField extends VBox {
         }
         double si;
         try {
-            si = Units.parse(text, quantity, system);
+            si = Units.parse(text, quantity, display);
         } catch (UnitParseException e) {
             showError(e.getMessage());
             return;

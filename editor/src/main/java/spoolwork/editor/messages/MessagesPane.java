@@ -35,6 +35,7 @@ public final class MessagesPane extends BorderPane {
     private final ObservableList<Message> notices = FXCollections.observableArrayList();
     private final ObservableList<Message> all = FXCollections.observableArrayList();
     private final ListView<Message> list = new ListView<>(all);
+    private java.util.function.Consumer<String> onPick = p -> { };
 
     public MessagesPane() {
         getStyleClass().add("messages");
@@ -44,6 +45,12 @@ public final class MessagesPane extends BorderPane {
         setCenter(list);
         list.setId("messages-list");
         list.setPlaceholder(new Label("No messages"));
+        list.setOnMouseClicked(e -> {
+            Message m = list.getSelectionModel().getSelectedItem();
+            if (m != null && !m.place().isEmpty()) {
+                onPick.accept(m.place());
+            }
+        });
         list.setCellFactory(v -> new ListCell<>() {
             @Override
             protected void updateItem(Message m, boolean empty) {
@@ -57,6 +64,11 @@ public final class MessagesPane extends BorderPane {
                 }
             }
         });
+    }
+
+    /** What to do when the user clicks a message about a place (a component tag). */
+    public void setOnPick(java.util.function.Consumer<String> pick) {
+        onPick = pick;
     }
 
     /** Adds a notice (file opened, edit refused …), newest first, keeping the last fifty. */
@@ -92,6 +104,11 @@ public final class MessagesPane extends BorderPane {
                 if (!p.mechanical() && !used.contains(k.id() + "." + p.name())) {
                     open.add(p.name());
                 }
+            }
+            // Each reservoir symbol on a drawing is the same tank drawn where a line needs it, so one
+            // connected port is enough.
+            if (k.type() == spoolwork.model.ComponentType.RESERVOIR && open.size() < k.type().ports().size()) {
+                continue;
             }
             if (!open.isEmpty()) {
                 out.add(new Message(Level.CHECK, k.tag(), (open.size() == 1 ? "port " : "ports ")

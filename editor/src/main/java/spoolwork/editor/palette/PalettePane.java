@@ -57,6 +57,7 @@ public final class PalettePane extends VBox {
                 b.setMaxWidth(Double.MAX_VALUE);
                 b.setAlignment(Pos.CENTER_LEFT);
                 b.setGraphicTextGap(8);
+                b.setWrapText(true);
                 b.setFocusTraversable(false);
                 Tooltip tip = new Tooltip(t.label() + " — ports " + String.join(", ",
                         t.ports().stream().map(p -> p.name()).toList()) + ". Click, then click on the sheet; or drag it there.");

@@ -95,7 +95,7 @@ public final class EditorWindow {
         palette = new PalettePane(art, sheet);
         files = new FileActions(doc, settings, dialogs, () -> stage,
                 m -> messages.notice(m.startsWith("Could not") ? MessagesPane.Level.ERROR : MessagesPane.Level.NOTE, "", m),
-                () -> Platform.runLater(sheet::fit));
+                () -> Platform.runLater(sheet::fitSheet));
 
         root.getStyleClass().add("editor-root");
         VBox top = new VBox(menuBar(), toolBar());
@@ -104,24 +104,26 @@ public final class EditorWindow {
         centre.setOrientation(Orientation.VERTICAL);
         centre.setDividerPositions(0.82);
         SplitPane.setResizableWithParent(messages, false);
-        palette.setPrefWidth(240);
+        palette.setPrefWidth(270);
         palette.setMinWidth(180);
         inspector.setPrefWidth(300);
         inspector.setMinWidth(220);
         SplitPane main = new SplitPane(palette, centre, inspector);
-        main.setDividerPositions(0.16, 0.80);
+        main.setDividerPositions(0.19, 0.79);
         SplitPane.setResizableWithParent(palette, false);
         SplitPane.setResizableWithParent(inspector, false);
         root.setCenter(main);
         root.setBottom(statusBar());
 
-        Scene scene = new Scene(root, 1440, 900);
+        var screen = javafx.stage.Screen.getPrimary().getVisualBounds();
+        Scene scene = new Scene(root, Math.min(1440, screen.getWidth() * 0.94), Math.min(900, screen.getHeight() * 0.92));
         var css = EditorWindow.class.getResource("/spoolwork/editor/editor.css");
         if (css != null) {
             scene.getStylesheets().add(css.toExternalForm());
         }
         scene.getAccelerators().put(new KeyCodeCombination(KeyCode.Z, KeyCombination.SHORTCUT_DOWN, KeyCombination.SHIFT_DOWN),
                 () -> guarded(this::redo));
+        scene.getAccelerators().put(new KeyCodeCombination(KeyCode.BACK_SPACE), () -> guarded(this::delete));
         stage.setScene(scene);
         stage.titleProperty().bind(Bindings.createStringBinding(
                 () -> (doc.isDirty() ? "• " : "") + files.documentName() + " — Spoolwork",
@@ -133,6 +135,7 @@ public final class EditorWindow {
         });
         doc.revisionProperty().addListener((o, a, b) -> messages.check(doc.getCircuit()));
         messages.check(doc.getCircuit());
+        messages.setOnPick(place -> doc.getCircuit().componentByTag(place).ifPresent(k -> selection.set(List.of(k.id()))));
         settings.recentFiles().addListener((ListChangeListener<Path>) c -> rebuildRecent());
         rebuildRecent();
     }
@@ -478,9 +481,13 @@ public final class EditorWindow {
         for (String a : args) {
             if (!a.startsWith("-")) {
                 files.load(Path.of(a));
+                Platform.runLater(sheet::requestFocus);
                 return;
             }
         }
-        Platform.runLater(sheet::fitSheet);
+        Platform.runLater(() -> {
+            sheet.fitSheet();
+            sheet.requestFocus();
+        });
     }
 }
