@@ -165,7 +165,7 @@ public final class Actuator extends Element {
             rep.value("velocity_mps", u);
             rep.value("force_n", hydraulic);
         }
-        rep.value("load", constant + resistive * Math.signum(u));
+        rep.value(motor ? "load_nm" : "load_n", constant + resistive * Math.signum(u));
         rep.power(PowerKind.USEFUL, constant * omega + resistive * Math.abs(omega));
         rep.power(PowerKind.ACTUATOR, friction * Math.abs(omega));
     }

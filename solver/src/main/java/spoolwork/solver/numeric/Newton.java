@@ -73,7 +73,7 @@ public final class Newton {
             }
             boolean small = within(s, f);
             if (small && stepNorm <= STEP_TOLERANCE) {
-                return new Result(x, true, it, null, -1);
+                return new Result(polish(s, x, f, y, colScale, rowScale), true, it + 1, null, -1);
             }
             history[it % history.length] = merit;
             double reference = 0;
@@ -125,13 +125,44 @@ public final class Newton {
             lin.clear();
             s.evaluate(x, f, lin);
             if (within(s, f) && alpha * stepNorm <= STEP_TOLERANCE) {
-                return new Result(x, true, it + 1, null, -1);
+                lin.clear();
+                s.evaluate(x, f, lin);
+                double[] last = lin.solve(negScaled(f, rowScale), rowScale, colScale);
+                return new Result(last == null ? x : polish(s, x, f, last, colScale, rowScale), true, it + 2, null, -1);
             }
         }
         if (within(s, f)) {
             return new Result(x, true, maxIterations, null, -1);
         }
         return new Result(x, false, maxIterations, "iteration limit reached", worst(s, f));
+    }
+
+    private static double[] negScaled(double[] f, double[] rowScale) {
+        double[] r = new double[f.length];
+        for (int i = 0; i < f.length; i++) {
+            r[i] = -f[i] / rowScale[i];
+        }
+        return r;
+    }
+
+    /**
+     * One last full Newton step from a converged point: it costs one evaluation and takes the residuals from
+     * the tolerance to round-off, so that balances computed from the result (power) hold far tighter than
+     * the tolerance. Kept only if it does not make any row worse than its tolerance.
+     */
+    private static double[] polish(NonlinearSystem s, double[] x, double[] f, double[] y, double[] colScale,
+                                   double[] rowScale) {
+        int n = x.length;
+        double[] xt = new double[n];
+        for (int i = 0; i < n; i++) {
+            xt[i] = x[i] + y[i] * colScale[i];
+        }
+        double[] ft = new double[n];
+        s.evaluate(xt, ft, null);
+        if (finite(ft) && within(s, ft) && merit(ft, rowScale) <= merit(f, rowScale)) {
+            return xt;
+        }
+        return x;
     }
 
     private static double merit(double[] f, double[] scale) {

@@ -2,9 +2,11 @@ package spoolwork.solver.topology;
 
 import java.util.ArrayDeque;
 import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.HashSet;
 import java.util.LinkedHashSet;
 import java.util.List;
+import java.util.Map;
 import java.util.Set;
 
 import org.jgrapht.Graph;
@@ -37,7 +39,12 @@ public final class TopologyCheck {
         this.circuit = circuit;
         this.state = state;
         this.netlist = netlist;
+        for (Component c : circuit.components()) {
+            typeOf.put(c.id(), c.type());
+        }
     }
+
+    private final Map<String, ComponentType> typeOf = new HashMap<>();
 
     public List<Diagnostic> run() {
         List<Diagnostic> out = new ArrayList<>();
@@ -115,55 +122,70 @@ public final class TopologyCheck {
                 || c.type() == ComponentType.PLUG;
     }
 
-    /** Nodes reachable from start through lines and internal paths, not crossing pumps' internal paths. */
-    private Set<NetNode> reach(NetNode start, String skipComponent) {
+    /**
+     * Labels the nodes by connected part of the graph, leaving out the internal paths of pumps (a pump does
+     * not pass its outlet pressure back to its inlet) and, when asked, of motors.
+     */
+    private Map<NetNode, Integer> parts(boolean cutMotors) {
         Graph<NetNode, NetEdge> g = netlist.graph();
-        Set<NetNode> seen = new LinkedHashSet<>();
-        ArrayDeque<NetNode> queue = new ArrayDeque<>();
-        seen.add(start);
-        queue.add(start);
-        while (!queue.isEmpty()) {
-            NetNode n = queue.poll();
-            for (NetEdge e : g.edgesOf(n)) {
-                if (e instanceof NetEdge.InternalEdge ie) {
-                    Component c = circuit.component(ie.componentId()).orElseThrow();
-                    if (c.type().isPump() || ie.componentId().equals(skipComponent)) {
-                        continue;
+        Map<NetNode, Integer> label = new HashMap<>();
+        int next = 0;
+        for (NetNode start : g.vertexSet()) {
+            if (label.containsKey(start)) {
+                continue;
+            }
+            int id = next++;
+            ArrayDeque<NetNode> queue = new ArrayDeque<>();
+            label.put(start, id);
+            queue.add(start);
+            while (!queue.isEmpty()) {
+                NetNode n = queue.poll();
+                for (NetEdge e : g.edgesOf(n)) {
+                    if (e instanceof NetEdge.InternalEdge ie) {
+                        ComponentType t = typeOf.get(ie.componentId());
+                        if (t.isPump() || (cutMotors && t == ComponentType.HYDRAULIC_MOTOR)) {
+                            continue;
+                        }
+                    }
+                    NetNode m = Graphs.getOppositeVertex(g, e, n);
+                    if (!label.containsKey(m)) {
+                        label.put(m, id);
+                        queue.add(m);
                     }
                 }
-                NetNode m = Graphs.getOppositeVertex(g, e, n);
-                if (seen.add(m)) {
-                    queue.add(m);
-                }
             }
         }
-        return seen;
+        return label;
     }
 
-    private boolean hasPort(Set<NetNode> nodes, ComponentType type, String port) {
-        for (NetNode n : nodes) {
-            if (n instanceof NetNode.Port p && (port == null || p.port().equals(port))
-                    && circuit.component(p.componentId()).orElseThrow().type() == type) {
-                return true;
+    /** Labels of the parts that hold a port of one of the given types (and port name, when not null). */
+    private Set<Integer> partsWith(Map<NetNode, Integer> label, Set<ComponentType> types, String port) {
+        Set<Integer> out = new HashSet<>();
+        for (Map.Entry<NetNode, Integer> e : label.entrySet()) {
+            if (e.getKey() instanceof NetNode.Port p && types.contains(typeOf.get(p.componentId()))
+                    && (port == null || p.port().equals(port))) {
+                out.add(e.getValue());
             }
         }
-        return false;
+        return out;
     }
 
     private void pumps(List<Diagnostic> out) {
+        Map<NetNode, Integer> label = parts(false);
+        Set<Integer> relieved = partsWith(label, Set.of(ComponentType.RELIEF_VALVE), "P");
+        Set<Integer> fed = partsWith(label, Set.of(ComponentType.RESERVOIR), null);
         for (Component c : circuit.components()) {
             if (!c.type().isPump()) {
                 continue;
             }
-            Set<NetNode> outlet = reach(new NetNode.Port(c.id(), "P"), null);
-            if (c.type() == ComponentType.FIXED_PUMP && !hasPort(outlet, ComponentType.RELIEF_VALVE, "P")) {
+            int outlet = label.get(new NetNode.Port(c.id(), "P"));
+            if (c.type() == ComponentType.FIXED_PUMP && !relieved.contains(outlet)) {
                 out.add(new Diagnostic(Severity.ERROR, "the outlet of fixed pump " + c.tag()
                         + " reaches no relief valve in state " + state.name()
                         + ": its pressure would rise until something breaks. Add a relief valve at the pump.",
                         List.of(c.tag())));
             }
-            Set<NetNode> inlet = reach(new NetNode.Port(c.id(), "S"), null);
-            if (!hasPort(inlet, ComponentType.RESERVOIR, null)) {
+            if (!fed.contains(label.get(new NetNode.Port(c.id(), "S")))) {
                 out.add(new Diagnostic(Severity.ERROR, "the inlet S of pump " + c.tag()
                         + " is not fed from a reservoir: it would run dry", List.of(c.tag())));
             }
@@ -171,6 +193,9 @@ public final class TopologyCheck {
     }
 
     private void locked(List<Diagnostic> out) {
+        Map<NetNode, Integer> label = parts(true);
+        Set<Integer> escape = partsWith(label, Set.of(ComponentType.RESERVOIR, ComponentType.FIXED_PUMP,
+                ComponentType.COMPENSATED_PUMP, ComponentType.ACCUMULATOR), null);
         for (Component c : circuit.components()) {
             if (!c.type().isActuator()) {
                 continue;
@@ -181,21 +206,7 @@ public final class TopologyCheck {
             }
             List<String> trapped = new ArrayList<>();
             for (PortSpec ps : c.type().ports()) {
-                if (ps.mechanical()) {
-                    continue;
-                }
-                Set<NetNode> r = reach(new NetNode.Port(c.id(), ps.name()), c.id());
-                boolean escapes = false;
-                for (NetNode n : r) {
-                    if (n instanceof NetNode.Port p) {
-                        ComponentType t = circuit.component(p.componentId()).orElseThrow().type();
-                        if (t == ComponentType.RESERVOIR || t.isPump() || t == ComponentType.ACCUMULATOR) {
-                            escapes = true;
-                            break;
-                        }
-                    }
-                }
-                if (!escapes) {
+                if (!ps.mechanical() && !escape.contains(label.get(new NetNode.Port(c.id(), ps.name())))) {
                     trapped.add(ps.name());
                 }
             }
