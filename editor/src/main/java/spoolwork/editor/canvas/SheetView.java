@@ -976,8 +976,9 @@ public final class SheetView extends Region {
                 boolean[] moves = g.hangingMoves.get(i);
                 Router.End a = moves[0] ? shift(ends[0], dx, dy) : ends[0];
                 Router.End b = moves[1] ? shift(ends[1], dx, dy) : ends[1];
-                List<Point> pts = Router.polyline(a.at(), Router.quick(a, b), b.at());
                 LineView v = g.hanging.get(i);
+                List<Point> kept = Router.stretch(v.points, moves[0], dx, dy, moves[0] ? a.exit() : b.exit());
+                List<Point> pts = Router.polyline(a.at(), kept != null ? kept : Router.quick(a, b), b.at());
                 setPoints(v, pts);
             }
         } else if (gesture instanceof ConnectGesture g) {

@@ -195,7 +195,14 @@ public final class Edits {
         }
         Draft r = new Draft(out);
         for (Line l : rerouted) {
-            r.lines.put(l.id(), l.withBends(routeCarefully ? route(out, l, Set.of()) : quickRoute(out, l)));
+            boolean startMoved = owners.contains(l.from().ownerId());
+            Endpoint moved = startMoved ? l.from() : l.to();
+            List<Point> kept = Router.stretch(polyline(c, l), startMoved, dx, dy, exit(out, moved));
+            if (kept != null && clear(out, l, kept)) {
+                r.lines.put(l.id(), l.withBends(kept));
+            } else {
+                r.lines.put(l.id(), l.withBends(routeCarefully ? route(out, l, Set.of()) : quickRoute(out, l)));
+            }
         }
         return r.build();
     }
@@ -618,6 +625,36 @@ public final class Edits {
     /** The drawn polyline of a line: its start, bends and end, grid units. */
     public List<Point> polyline(Circuit c, Line l) {
         return Router.polyline(position(c, l.from()), l.bends(), position(c, l.to()));
+    }
+
+    /** The direction a line leaves an endpoint in, or null for a junction. */
+    public Point exit(Circuit c, Endpoint e) {
+        if (e instanceof Endpoint.PortRef p) {
+            return geometry.exitDirection(component(c, p.componentId()), p.port());
+        }
+        return null;
+    }
+
+    /** True when the line with these bends runs through no symbol. */
+    private boolean clear(Circuit c, Line l, List<Point> bends) {
+        List<Point> pts = Router.polyline(position(c, l.from()), bends, position(c, l.to()));
+        Box span = null;
+        for (Point p : pts) {
+            Box pb = new Box(p.x(), p.y(), p.x(), p.y());
+            span = span == null ? pb : span.union(pb);
+        }
+        for (Component k : c.components()) {
+            Box b = geometry.bounds(k);
+            if (!b.intersects(span)) {
+                continue;
+            }
+            for (int i = 0; i + 1 < pts.size(); i++) {
+                if (Router.crosses(pts.get(i), pts.get(i + 1), b)) {
+                    return false;
+                }
+            }
+        }
+        return true;
     }
 
     private Router.End end(Circuit c, Endpoint e) {

@@ -123,6 +123,66 @@ public final class Router {
         return inner(simplify(pts));
     }
 
+    /**
+     * The bends of a line after one of its ends moved by (dx, dy), keeping the user's route: the bend next to
+     * the moved end slides with it so the first run stays straight, the rest stays put. Null when that
+     * cannot keep the line orthogonal and leaving its port forwards; the caller then routes afresh.
+     *
+     * @param poly       the line as drawn before the move, start to end
+     * @param movedStart true when the start moved, false when the end moved
+     * @param exit       the direction the line leaves the moved end in (null for a junction)
+     */
+    public static List<Point> stretch(List<Point> poly, boolean movedStart, double dx, double dy, Point exit) {
+        if (poly.size() < 3) {
+            return null;
+        }
+        List<Point> pts = new ArrayList<>(poly);
+        if (!movedStart) {
+            java.util.Collections.reverse(pts);
+        }
+        Point end = pts.get(0);
+        Point bend = pts.get(1);
+        boolean horizontal = Math.abs(end.y() - bend.y()) < 1e-9;
+        boolean vertical = Math.abs(end.x() - bend.x()) < 1e-9;
+        if (horizontal == vertical) {
+            return null;
+        }
+        Point newEnd = new Point(end.x() + dx, end.y() + dy);
+        Point newBend = horizontal ? new Point(bend.x(), bend.y() + dy) : new Point(bend.x() + dx, bend.y());
+        if (exit != null) {
+            double ahead = horizontal ? (newBend.x() - newEnd.x()) * exit.x() : (newBend.y() - newEnd.y()) * exit.y();
+            boolean along = horizontal ? exit.y() == 0 : exit.x() == 0;
+            if (!along || ahead < 1) {
+                return null;
+            }
+        }
+        pts.set(0, newEnd);
+        pts.set(1, newBend);
+        // The bend after the moved one shared its other coordinate; it stays, and so that run stays straight.
+        for (int i = 0; i + 1 < pts.size(); i++) {
+            Point a = pts.get(i);
+            Point b = pts.get(i + 1);
+            if (Math.abs(a.x() - b.x()) > 1e-9 && Math.abs(a.y() - b.y()) > 1e-9) {
+                return null;
+            }
+        }
+        List<Point> simple = simplify(pts);
+        if (!movedStart) {
+            java.util.Collections.reverse(simple);
+        }
+        return inner(simple);
+    }
+
+    /** True when a straight run passes through the inside of the box (touching its outline does not count). */
+    public static boolean crosses(Point a, Point b, Box box) {
+        if (Math.abs(a.y() - b.y()) < 1e-9) {
+            return a.y() > box.minY() && a.y() < box.maxY()
+                    && Math.max(a.x(), b.x()) > box.minX() && Math.min(a.x(), b.x()) < box.maxX();
+        }
+        return a.x() > box.minX() && a.x() < box.maxX()
+                && Math.max(a.y(), b.y()) > box.minY() && Math.min(a.y(), b.y()) < box.maxY();
+    }
+
     /** The full polyline through a line's ends and bends, as drawn. */
     public static List<Point> polyline(Point from, List<Point> bends, Point to) {
         List<Point> pts = new ArrayList<>(bends.size() + 2);

@@ -242,4 +242,24 @@ class EditsTest {
         }
         return s;
     }
+
+    @Test
+    void aSmallMoveKeepsTheRouteTheUserShaped() {
+        String pump = place(ComponentType.FIXED_PUMP, 10, 30);
+        String valve = place(ComponentType.DIRECTIONAL_4_3, 30, 12);
+        String line = connect(Endpoint.port(pump, "P"), Endpoint.port(valve, "P"));
+        Circuit c = doc.getCircuit();
+        List<Point> drawn = edits.polyline(c, c.line(line).orElseThrow());
+        assertTrue(drawn.size() >= 4, drawn.toString());
+        assertTrue(doc.execute(edits.moveSegment(line, 1, 3)));
+        Circuit shaped = doc.getCircuit();
+        List<Point> before = edits.polyline(shaped, shaped.line(line).orElseThrow());
+        assertTrue(doc.execute(edits.move(List.of(valve), 1, 0)));
+        Circuit d = doc.getCircuit();
+        List<Point> after = edits.polyline(d, d.line(line).orElseThrow());
+        assertEquals(before.size(), after.size(), before + " → " + after);
+        // Everything but the last two points (the moved port and the bend next to it) stays where the user put it.
+        assertEquals(before.subList(0, before.size() - 2), after.subList(0, after.size() - 2));
+        assertEquals(edits.position(d, Endpoint.port(valve, "P")), after.get(after.size() - 1));
+    }
 }
