@@ -57,7 +57,6 @@ import spoolwork.model.ComponentType;
 import spoolwork.model.Endpoint;
 import spoolwork.model.Junction;
 import spoolwork.model.Line;
-import spoolwork.model.LineKind;
 import spoolwork.model.ModelException;
 import spoolwork.model.Note;
 import spoolwork.model.Point;
@@ -206,8 +205,6 @@ public final class SheetView extends Region {
     /** Text a palette entry puts on the drag board, followed by the type key. */
     public static final String DRAG_PREFIX = "spoolwork-type:";
 
-    // ------------------------------------------------------------------ properties
-
     /** The component type the next click places, or null. */
     public ObjectProperty<ComponentType> armedProperty() {
         return armed;
@@ -252,8 +249,6 @@ public final class SheetView extends Region {
         Point2D v = toView(p);
         return localToScreen(v.getX(), v.getY());
     }
-
-    // ------------------------------------------------------------------ view
 
     @Override
     protected void layoutChildren() {
@@ -353,8 +348,6 @@ public final class SheetView extends Region {
             }
         }
     }
-
-    // ------------------------------------------------------------------ following the document
 
     /** Brings the nodes up to date with the circuit, touching only elements that changed. */
     public void sync() {
@@ -668,8 +661,6 @@ public final class SheetView extends Region {
         return r;
     }
 
-    // ------------------------------------------------------------------ hit testing
-
     /** What lies under a sheet point: the most specific thing first. */
     public sealed interface Hit permits PortHit, JunctionHit, ComponentHit, NoteHit, LineHit {
     }
@@ -752,8 +743,6 @@ public final class SheetView extends Region {
         double t = len2 == 0 ? 0 : Math.max(0, Math.min(1, ((p.x() - a.x()) * vx + (p.y() - a.y()) * vy) / len2));
         return Math.hypot(a.x() + t * vx - p.x(), a.y() + t * vy - p.y());
     }
-
-    // ------------------------------------------------------------------ pointer tools
 
     private sealed interface Gesture permits MoveGesture, ConnectGesture, BandGesture, SegmentGesture, PanGesture {
     }
@@ -1263,9 +1252,5 @@ public final class SheetView extends Region {
     public Node componentNode(String id) {
         CompView v = comps.get(id);
         return v == null ? null : v.node;
-    }
-
-    static LineKind kindOf(Line l) {
-        return l.kind();
     }
 }

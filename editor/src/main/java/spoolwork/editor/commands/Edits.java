@@ -46,8 +46,6 @@ public final class Edits {
         return geometry;
     }
 
-    // ---------------------------------------------------------------- placing and connecting
-
     /** Places a new component with default values and the next free tag; its id is {@code c.freshId("c")}. */
     public Command place(ComponentType type, double x, double y) {
         return new Command("Place " + type.label().toLowerCase(), c -> {
@@ -140,8 +138,6 @@ public final class Edits {
         out.removeIf(p -> p.equals(j));
         return out;
     }
-
-    // ---------------------------------------------------------------- moving and turning
 
     /**
      * Moves the components, junctions and notes among {@code ids} by (dx, dy) grid units. Lines with both
@@ -375,8 +371,6 @@ public final class Edits {
         return simple.size() <= 2 ? List.of() : List.copyOf(simple.subList(1, simple.size() - 1));
     }
 
-    // ---------------------------------------------------------------- deleting and copying
-
     /** Deletes the selected elements; lines of deleted components go with them, and junctions left with
      * fewer than three lines are tidied (two lines become one, a lone stub goes). */
     public Command delete(Collection<String> ids) {
@@ -562,8 +556,6 @@ public final class Edits {
         return Endpoint.junction(ids.get(e.ownerId()));
     }
 
-    // ---------------------------------------------------------------- values
-
     public static Command setParam(String componentId, String key, double value) {
         return new Command("Change " + key.replace('_', ' '), c -> c.withComponent(component(c, componentId).withParam(key, value)));
     }
@@ -610,8 +602,6 @@ public final class Edits {
     public static Command setTitle(TitleBlock t) {
         return new Command("Edit title block", c -> c.withTitle(t));
     }
-
-    // ---------------------------------------------------------------- geometry of the drawing
 
     /** The sheet position of an endpoint, grid units. */
     public Point position(Circuit c, Endpoint e) {

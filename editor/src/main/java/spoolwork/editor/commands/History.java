@@ -8,7 +8,7 @@ import spoolwork.model.Circuit;
 
 /**
  * The undo and redo stacks: each entry holds the circuit before and after one command. Bounded, so a long
- * session does not keep every version; pushing a new step clears what could be redone.
+ * day of drawing does not keep every version; pushing a new step clears what could be redone.
  */
 public final class History {
     /** One undoable step. */

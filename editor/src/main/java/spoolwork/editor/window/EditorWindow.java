@@ -176,8 +176,6 @@ public final class EditorWindow {
         messages.notice(MessagesPane.Level.ERROR, "", "Not done: " + message);
     }
 
-    // ------------------------------------------------------------------ menus
-
     private MenuBar menuBar() {
         Menu file = new Menu("File");
         file.getItems().addAll(
@@ -339,8 +337,6 @@ public final class EditorWindow {
                 "Wheel zooms, Ctrl+0 fits the drawing; pan with the middle button or Space+drag."));
         a.show();
     }
-
-    // ------------------------------------------------------------------ actions
 
     /** Runs an editing action unless a text field has the keyboard, where the key belongs to the field. */
     private void guarded(Runnable r) {
