@@ -353,12 +353,15 @@ public final class SheetView extends Region {
     public void sync() {
         Circuit c = doc.getCircuit();
         Set<String> seen = new HashSet<>();
+        // Lines are looked at again only when they or one of their ends changed.
+        Set<String> changedOwners = new HashSet<>();
         for (Component k : c.components()) {
             seen.add(k.id());
             CompView v = comps.get(k.id());
             if (v != null && v.value.equals(k)) {
                 continue;
             }
+            changedOwners.add(k.id());
             if (v != null && v.value.at(0, 0).equals(k.at(0, 0))) {
                 v.node.setLayoutX(k.x() * PX);
                 v.node.setLayoutY(k.y() * PX);
@@ -374,17 +377,33 @@ public final class SheetView extends Region {
         }
         comps.keySet().removeIf(id -> {
             if (!seen.contains(id)) {
+                changedOwners.add(id);
                 symbolLayer.getChildren().remove(comps.get(id).node);
                 return true;
             }
             return false;
         });
 
+        for (Junction j : c.junctions()) {
+            JunctionView v = junctions.get(j.id());
+            if (v == null || !v.value.equals(j)) {
+                changedOwners.add(j.id());
+            }
+        }
+        junctions.keySet().forEach(id -> {
+            if (c.junction(id).isEmpty()) {
+                changedOwners.add(id);
+            }
+        });
         seen.clear();
         for (Line l : c.lines()) {
             seen.add(l.id());
-            List<Point> pts = edits.polyline(c, l);
             LineView v = lines.get(l.id());
+            if (v != null && v.value.equals(l) && !changedOwners.contains(l.from().ownerId())
+                    && !changedOwners.contains(l.to().ownerId())) {
+                continue;
+            }
+            List<Point> pts = edits.polyline(c, l);
             if (v != null && v.value.equals(l) && v.points.equals(pts)) {
                 continue;
             }

@@ -87,10 +87,12 @@ public final class InspectorPane extends VBox {
         } else {
             target = selection.size();
         }
-        if (target.equals(shown) && settings.getUnitSystem() == shownSystem) {
+        // The inspector shows no position, so a moved component keeps its form (and any error shown in it).
+        Object key = target instanceof Component k ? k.at(0, 0) : target;
+        if (key.equals(shown) && settings.getUnitSystem() == shownSystem) {
             return;
         }
-        shown = target;
+        shown = key;
         shownSystem = settings.getUnitSystem();
         body.getChildren().clear();
         if (target instanceof Component k) {

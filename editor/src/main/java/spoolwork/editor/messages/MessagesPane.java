@@ -82,8 +82,11 @@ public final class MessagesPane extends BorderPane {
 
     /** Recomputes the drawing checks for the circuit. */
     public void check(Circuit c) {
-        checks.setAll(openPorts(c));
-        rebuild();
+        List<Message> now = openPorts(c);
+        if (!now.equals(checks)) {
+            checks.setAll(now);
+            rebuild();
+        }
     }
 
     public List<Message> messages() {
