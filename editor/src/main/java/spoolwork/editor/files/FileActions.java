@@ -130,6 +130,37 @@ public final class FileActions {
         }
     }
 
+    /**
+     * Writes the drawing as an SVG picture (symbols, lines, tags, notes; valves at rest) to a file the user
+     * chooses, replacing it only once the new picture is complete.
+     */
+    public boolean exportSvg() {
+        Path folder = doc.getFile() != null ? doc.getFile().toAbsolutePath().getParent() : null;
+        String base = doc.getFile() != null ? doc.getFile().getFileName().toString().replace(CircuitFiles.EXTENSION, "")
+                : safeName(documentName());
+        return dialogs.chooseSave(owner.get(), folder, base + ".svg").map(p -> {
+            Path target = p.getFileName().toString().contains(".") ? p : p.resolveSibling(p.getFileName() + ".svg");
+            try {
+                String svg = spoolwork.symbols.SvgWriter.circuit(spoolwork.symbols.CircuitDrawing.of(doc.getCircuit(), null));
+                Path dir = target.toAbsolutePath().getParent();
+                Path tmp = java.nio.file.Files.createTempFile(dir, "." + target.getFileName() + ".", ".tmp");
+                try {
+                    java.nio.file.Files.writeString(tmp, svg, java.nio.charset.StandardCharsets.UTF_8);
+                    java.nio.file.Files.move(tmp, target, java.nio.file.StandardCopyOption.REPLACE_EXISTING,
+                            java.nio.file.StandardCopyOption.ATOMIC_MOVE);
+                } finally {
+                    java.nio.file.Files.deleteIfExists(tmp);
+                }
+                notice.accept("Drew " + target.getFileName());
+                return true;
+            } catch (IOException | IllegalArgumentException e) {
+                notice.accept("Could not draw " + target.getFileName() + ": " + e.getMessage());
+                dialogs.error(owner.get(), "Could not write " + target.getFileName(), e.getMessage());
+                return false;
+            }
+        }).orElse(false);
+    }
+
     /** True when there is no unsaved work, or the user saved it or chose to let it go. */
     public boolean confirmDiscard() {
         if (!doc.isDirty()) {

@@ -185,6 +185,7 @@ public final class EditorWindow {
                 new SeparatorMenuItem(),
                 item("Save", "Ctrl+S", () -> files.save()),
                 item("Save as…", "Ctrl+Shift+S", () -> files.saveAs()),
+                item("Export drawing as SVG…", null, () -> files.exportSvg()),
                 new SeparatorMenuItem(),
                 item("Quit", "Ctrl+Q", this::quit));
 

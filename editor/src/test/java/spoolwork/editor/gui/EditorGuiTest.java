@@ -270,6 +270,14 @@ class EditorGuiTest {
         robot.interact(() -> window.openOnStart(List.of(file.toString())));
         assertEquals(drawn, circuit());
 
+        // The drawing as a picture: a complete SVG document with one group per symbol.
+        Path svg = dir.resolve("press.svg");
+        dialogs.nextSave = svg;
+        robot.interact(() -> assertTrue(window.files().exportSvg()));
+        String text = Files.readString(svg);
+        assertTrue(text.contains("<svg") && text.trim().endsWith("</svg>"), text.substring(0, Math.min(200, text.length())));
+        javax.xml.parsers.DocumentBuilderFactory.newInstance().newDocumentBuilder().parse(svg.toFile());
+
         // A broken file is reported and the open drawing stays.
         Path bad = dir.resolve("broken.spool.json");
         Files.writeString(bad, "{\"format\": \"spoolwork-circuit\", \"version\": 2, \"components\": [ {\"id\": 3} ]}");
