@@ -3,11 +3,11 @@ package spoolwork.editor.canvas;
 import java.util.HashMap;
 import java.util.Map;
 
-import spoolwork.editor.geometry.Box;
 import spoolwork.editor.geometry.SheetGeometry;
 import spoolwork.model.Component;
 import spoolwork.model.Point;
 import spoolwork.symbols.Anchor;
+import spoolwork.symbols.Box;
 import spoolwork.symbols.Symbol;
 import spoolwork.symbols.SymbolLibrary;
 import spoolwork.symbols.Transform;

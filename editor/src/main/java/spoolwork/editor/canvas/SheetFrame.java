@@ -11,8 +11,8 @@ import javafx.scene.text.Font;
 import javafx.scene.text.FontWeight;
 import javafx.scene.text.Text;
 
-import spoolwork.editor.geometry.Box;
 import spoolwork.model.TitleBlock;
+import spoolwork.symbols.Box;
 
 /** The sheet's border and the title block in its lower right corner, as nodes in sheet pixels. */
 final class SheetFrame {

@@ -48,8 +48,6 @@ import spoolwork.editor.commands.Command;
 import spoolwork.editor.commands.Edits;
 import spoolwork.editor.document.EditorDocument;
 import spoolwork.editor.document.Selection;
-import spoolwork.editor.geometry.Box;
-import spoolwork.editor.geometry.Router;
 import spoolwork.editor.geometry.SheetGeometry;
 import spoolwork.model.Circuit;
 import spoolwork.model.Component;
@@ -62,6 +60,8 @@ import spoolwork.model.Note;
 import spoolwork.model.Point;
 import spoolwork.model.PortSpec;
 import spoolwork.model.TitleBlock;
+import spoolwork.symbols.Box;
+import spoolwork.symbols.routing.Router;
 
 /**
  * The drawing sheet: a zoomable, pannable view of the circuit with a grid, the title block, lines,

@@ -9,8 +9,6 @@ import java.util.List;
 import java.util.Map;
 import java.util.Set;
 
-import spoolwork.editor.geometry.Box;
-import spoolwork.editor.geometry.Router;
 import spoolwork.editor.geometry.SheetGeometry;
 import spoolwork.model.Circuit;
 import spoolwork.model.Component;
@@ -24,6 +22,8 @@ import spoolwork.model.Note;
 import spoolwork.model.Point;
 import spoolwork.model.PortSpec;
 import spoolwork.model.TitleBlock;
+import spoolwork.symbols.Box;
+import spoolwork.symbols.routing.Router;
 
 /**
  * The editing operations of the drawing, each as a {@link Command} over the circuit. They need the sheet

@@ -2,6 +2,7 @@ package spoolwork.editor.geometry;
 
 import spoolwork.model.Component;
 import spoolwork.model.Point;
+import spoolwork.symbols.Box;
 
 /**
  * Where a placed component sits on the sheet: its outline and the positions of its ports, grid units,

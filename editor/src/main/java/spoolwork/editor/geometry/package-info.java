@@ -1,5 +1,6 @@
 /**
- * Sheet geometry and orthogonal line routing, in grid units with y down. No JavaFX here, so routing and
- * hit geometry are tested on their own.
+ * Where placed components sit on the sheet, in grid units with y down; the routing of lines lives in
+ * {@code spoolwork.symbols.routing}, shared with the SVG drawing. No JavaFX here, so hit geometry is tested
+ * on its own.
  */
 package spoolwork.editor.geometry;

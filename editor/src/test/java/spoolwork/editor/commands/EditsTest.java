@@ -13,7 +13,6 @@ import org.junit.jupiter.api.Test;
 
 import spoolwork.editor.canvas.LibraryGeometry;
 import spoolwork.editor.document.EditorDocument;
-import spoolwork.editor.geometry.Box;
 import spoolwork.model.Circuit;
 import spoolwork.model.Component;
 import spoolwork.model.ComponentType;
@@ -22,6 +21,7 @@ import spoolwork.model.Line;
 import spoolwork.model.LineKind;
 import spoolwork.model.ModelException;
 import spoolwork.model.Point;
+import spoolwork.symbols.Box;
 
 class EditsTest {
     private final LibraryGeometry geometry = new LibraryGeometry();

@@ -28,7 +28,6 @@ import org.testfx.framework.junit5.Start;
 import org.testfx.util.WaitForAsyncUtils;
 
 import spoolwork.editor.commands.Edits;
-import spoolwork.editor.geometry.Box;
 import spoolwork.editor.inspector.UnitField;
 import spoolwork.editor.settings.EditorSettings;
 import spoolwork.editor.window.EditorWindow;
@@ -40,6 +39,7 @@ import spoolwork.model.Line;
 import spoolwork.model.Point;
 import spoolwork.model.io.CircuitFiles;
 import spoolwork.model.units.UnitSystem;
+import spoolwork.symbols.Box;
 
 /** The editor driven through its window with the pointer and keys, headless. */
 @ExtendWith(ApplicationExtension.class)

@@ -1,9 +1,10 @@
-package spoolwork.editor.geometry;
+package spoolwork.symbols.routing;
 
 import java.util.ArrayList;
 import java.util.List;
 
 import spoolwork.model.Point;
+import spoolwork.symbols.Box;
 
 /**
  * Orthogonal routing of a line on the sheet's grid, around symbol outlines. The search runs over grid
