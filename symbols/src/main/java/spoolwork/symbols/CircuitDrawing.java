@@ -14,10 +14,13 @@ import spoolwork.model.Note;
 import spoolwork.model.OperatingState;
 import spoolwork.model.Point;
 import spoolwork.symbols.Shape.TextAnchor;
+import spoolwork.symbols.routing.AutoRoute;
 
 /**
  * A circuit drawn in sheet coordinates (grid units): each component's symbol placed, with valves shown in
- * the spool positions of an operating state; the lines routed from anchor through their bends to anchor;
+ * the spool positions of an operating state; the lines routed from anchor through their bends to anchor,
+ * where a line has no bends, or runs slanting between two of them, along the orthogonal route
+ * {@link AutoRoute#drawnRoutes} finds round the symbols;
  * a dot on each junction where three or more lines meet; tags and notes as upright text.
  *
  * @param symbols symbols placed on the sheet, in the circuit's component order
@@ -52,9 +55,11 @@ public record CircuitDrawing(List<Symbol> symbols, List<Shape.Text> tags, List<S
             byId.put(c.id(), s);
             tags.add(new Shape.Text(new Point(s.bounds().minX(), s.bounds().minY() - 0.8), c.tag(), TAG_SIZE, TextAnchor.START));
         }
+        // Lines without bends, and slanting runs between bends, are drawn orthogonal; the document stays as it is.
+        Map<String, List<Point>> routed = AutoRoute.drawnRoutes(circuit, byId);
         List<Shape> lines = new ArrayList<>();
         for (Line l : circuit.lines()) {
-            lines.addAll(LineArt.line(route(circuit, byId, l), l.kind()));
+            lines.addAll(LineArt.line(routed.get(l.id()), l.kind()));
         }
         List<Shape> dots = new ArrayList<>();
         for (Junction j : circuit.junctions()) {
