@@ -4,7 +4,6 @@ import java.util.List;
 import java.util.Locale;
 
 import spoolwork.model.Point;
-import spoolwork.model.PortSpec;
 import spoolwork.symbols.Shape.Arc;
 import spoolwork.symbols.Shape.Circle;
 import spoolwork.symbols.Shape.Polygon;
@@ -22,7 +21,7 @@ public final class SvgWriter {
     /** Stroke width, grid units (0.25 mm at print). */
     public static final double STROKE = 0.1;
     /** Cap height of port letters, grid units. */
-    public static final double PORT_LETTER = 0.7;
+    public static final double PORT_LETTER = PortLetters.SIZE;
 
     private SvgWriter() {
     }
@@ -129,26 +128,11 @@ public final class SvgWriter {
             shape(b, sh);
         }
         if (portLetters) {
-            for (Anchor a : s.anchors()) {
-                if (!a.port().equals(PortSpec.SHAFT)) {
-                    text(b, portLetter(a), "port");
-                }
+            for (Text t : PortLetters.of(s)) {
+                text(b, t, "port");
             }
         }
         b.append("</g>\n");
-    }
-
-    /** Where the letter of a port goes: just inside the anchor, beside the line. */
-    static Text portLetter(Anchor a) {
-        Direction o = a.outward();
-        double x = a.at().x() - o.dx() * 0.45;
-        double y = a.at().y() - o.dy() * 0.45;
-        if (o.dx() == 0) {
-            x += 0.45;
-            return new Text(new Point(x, y), a.port(), PORT_LETTER, Shape.TextAnchor.START);
-        }
-        y -= 0.55;
-        return new Text(new Point(x, y), a.port(), PORT_LETTER, Shape.TextAnchor.MIDDLE);
     }
 
     private static void shape(StringBuilder b, Shape sh) {
@@ -198,8 +182,9 @@ public final class SvgWriter {
         // The reference point is the vertical middle of the capitals: the baseline sits half a cap height below.
         b.append(" x=\"").append(n(t.at().x())).append("\" y=\"").append(n(t.at().y() + t.size() / 2))
                 .append("\" font-family=\"sans-serif\" font-size=\"").append(n(t.size() / 0.72))
-                .append("\" text-anchor=\"").append(anchor).append("\" fill=\"black\" stroke=\"none\">")
-                .append(esc(t.text())).append("</text>\n");
+                .append("\" text-anchor=\"").append(anchor).append("\" fill=\"black\" stroke=\"none\">");
+        b.append(esc(t.text()));
+        b.append("</text>\n");
     }
 
     private static void dash(StringBuilder b, Stroke s) {

@@ -8,7 +8,10 @@ import spoolwork.model.ComponentType;
 /** Draws components for the sheet and the palette; the drawing itself comes from the symbol library. */
 public interface ComponentArt {
 
-    /** The component's symbol, turned and mirrored, about its own origin, at {@code px} pixels per grid unit. */
+    /**
+     * The component's symbol, turned and mirrored, with its port letters, about its own origin, at {@code px}
+     * pixels per grid unit.
+     */
     Node paint(Component c, double px);
 
     /** A small picture of the type with default options, fitted into a square of {@code size} pixels. */

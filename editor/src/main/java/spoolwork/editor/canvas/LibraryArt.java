@@ -21,7 +21,7 @@ public final class LibraryArt implements ComponentArt {
 
     @Override
     public Node paint(Component c, double px) {
-        return SymbolPainter.paint(geometry.oriented(c), px);
+        return SymbolPainter.paintWithPortLetters(geometry.oriented(c), px);
     }
 
     @Override

@@ -14,6 +14,7 @@ import javafx.scene.text.Text;
 import javafx.scene.text.TextAlignment;
 
 import spoolwork.model.Point;
+import spoolwork.symbols.PortLetters;
 import spoolwork.symbols.Shape;
 import spoolwork.symbols.Stroke;
 import spoolwork.symbols.Symbol;
@@ -37,6 +38,20 @@ public final class SymbolPainter {
         }
         Group g = new Group(nodes);
         g.getStyleClass().add("symbol");
+        return g;
+    }
+
+    /**
+     * The symbol's shapes and, beside each fluid port, its letter placed as {@link PortLetters} places it in
+     * the SVG; at {@code px} pixels per grid unit, about the symbol's own origin.
+     */
+    public static Group paintWithPortLetters(Symbol s, double px) {
+        Group g = paint(s, px);
+        for (Shape.Text t : PortLetters.of(s)) {
+            Node n = node(t, px);
+            n.getStyleClass().setAll("sym-port");
+            g.getChildren().add(n);
+        }
         return g;
     }
 
