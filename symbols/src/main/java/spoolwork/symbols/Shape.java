@@ -141,11 +141,28 @@ public sealed interface Shape {
             return new Text(t.apply(at), text, size, anchor);
         }
 
+        /** Distance from one line of text to the next, in cap heights. */
+        public static final double LINE_SPACING = 1.6;
+
+        /**
+         * The text's lines, split at each line break (\n, \r\n or \r); one line when there is none. Line i
+         * has its reference point {@code i * LINE_SPACING * size} grid units below {@link #at}.
+         */
+        public List<String> lines() {
+            return List.of(text.split("\\R", -1));
+        }
+
         @Override
         public Box bounds() {
-            double w = 0.75 * size * text.length();
+            List<String> lines = lines();
+            int longest = 0;
+            for (String l : lines) {
+                longest = Math.max(longest, l.length());
+            }
+            double w = 0.75 * size * longest;
             double x0 = anchor == TextAnchor.START ? at.x() : anchor == TextAnchor.MIDDLE ? at.x() - w / 2 : at.x() - w;
-            return new Box(x0, at.y() - size / 2, x0 + w, at.y() + size / 2);
+            double below = (lines.size() - 1) * LINE_SPACING * size;
+            return new Box(x0, at.y() - size / 2, x0 + w, at.y() + below + size / 2);
         }
     }
 

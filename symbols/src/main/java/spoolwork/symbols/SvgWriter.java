@@ -183,7 +183,17 @@ public final class SvgWriter {
         b.append(" x=\"").append(n(t.at().x())).append("\" y=\"").append(n(t.at().y() + t.size() / 2))
                 .append("\" font-family=\"sans-serif\" font-size=\"").append(n(t.size() / 0.72))
                 .append("\" text-anchor=\"").append(anchor).append("\" fill=\"black\" stroke=\"none\">");
-        b.append(esc(t.text()));
+        List<String> lines = t.lines();
+        if (lines.size() == 1) {
+            b.append(esc(t.text()));
+        } else {
+            // SVG text does not break lines by itself: each line is a span of its own, one line spacing lower.
+            for (int i = 0; i < lines.size(); i++) {
+                b.append("<tspan x=\"").append(n(t.at().x())).append("\" y=\"")
+                        .append(n(t.at().y() + t.size() / 2 + i * Text.LINE_SPACING * t.size())).append("\">")
+                        .append(esc(lines.get(i))).append("</tspan>");
+            }
+        }
         b.append("</text>\n");
     }
 

@@ -91,4 +91,25 @@ class CircuitDrawingTest {
         assertEquals(6, symbols);
         assertTrue(svg.contains("Pump &amp; relief &lt;demo&gt;"));
     }
+
+    @Test
+    void eachLineOfANoteIsItsOwnTextLine() throws Exception {
+        Circuit c = sample().withNote(new Note("n2", 30, 32, "Relief set 160 bar\nCheck at the gauge\r\nweekly"));
+        CircuitDrawing d = CircuitDrawing.of(c, null);
+        Shape.Text note = d.notes().get(1);
+        assertEquals(List.of("Relief set 160 bar", "Check at the gauge", "weekly"), note.lines());
+        assertTrue(d.bounds().maxY() >= note.at().y() + 2 * Shape.Text.LINE_SPACING * note.size(), "the last line is on the sheet");
+        Document doc = SvgWriterTest.parse(SvgWriter.circuit(d));
+        NodeList spans = doc.getElementsByTagNameNS("http://www.w3.org/2000/svg", "tspan");
+        assertEquals(3, spans.getLength());
+        double previous = Double.NEGATIVE_INFINITY;
+        for (int i = 0; i < spans.getLength(); i++) {
+            Element s = (Element) spans.item(i);
+            assertEquals(note.lines().get(i), s.getTextContent());
+            assertEquals(30, Double.parseDouble(s.getAttribute("x")), 1e-9, "every line starts at the note's left edge");
+            double y = Double.parseDouble(s.getAttribute("y"));
+            assertTrue(y > previous, "line " + i + " below the one before");
+            previous = y;
+        }
+    }
 }
