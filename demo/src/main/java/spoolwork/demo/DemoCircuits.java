@@ -12,7 +12,6 @@ import spoolwork.model.ComponentType;
 import spoolwork.model.Fluid;
 import spoolwork.model.LineKind;
 import spoolwork.model.OperatingState;
-import spoolwork.model.Point;
 import spoolwork.model.TitleBlock;
 import spoolwork.model.io.CircuitFiles;
 
@@ -38,34 +37,37 @@ public final class DemoCircuits {
      */
     public static Circuit benchPress() {
         Sketch s = new Sketch()
-                .place("T1", ComponentType.RESERVOIR, 10, 56, "volume", 0.06)
-                .place("M1", ComponentType.PRIME_MOVER, 2, 46, "rated_power", 5500.0)
-                .place("P1", ComponentType.FIXED_PUMP, 10, 46)
-                .place("V1", ComponentType.RELIEF_VALVE, 20, 46, "cracking_pressure", 100e5, "override", 0.0)
-                .place("G1", ComponentType.PRESSURE_GAUGE, 20, 38)
-                .place("D1", ComponentType.DIRECTIONAL_4_3, 10, 30, "centre", "tandem")
-                .place("F1", ComponentType.FLOW_CONTROL, 6, 20, "set_flow", 10.0 / 60000)
-                .place("K1", ComponentType.CHECK_VALVE, 2, 20)
-                .place("C1", ComponentType.DOUBLE_ACTING_CYLINDER, 10, 8, "bore", 0.063, "rod", 0.036,
+                .place("C1", ComponentType.DOUBLE_ACTING_CYLINDER, 40, 10, "bore", 0.063, "rod", 0.036,
                         "stroke", 0.25)
-                .junction("JP", 10, 38).junction("JT", 18, 52).junction("JA1", 6, 25).junction("JA2", 6, 14)
+                .place("K1", ComponentType.CHECK_VALVE, 30, 22).turned(90)
+                .place("F1", ComponentType.FLOW_CONTROL, 36, 22, "set_flow", 10.0 / 60000).turned(270)
+                .place("D1", ComponentType.DIRECTIONAL_4_3, 37, 34, "centre", "tandem")
+                .place("T3", ComponentType.RESERVOIR, 43, 41, "volume", 0.06)
+                .place("G1", ComponentType.PRESSURE_GAUGE, 28, 38)
+                .place("V1", ComponentType.RELIEF_VALVE, 48, 47, "cracking_pressure", 100e5, "override", 0.0)
+                .turned(180)
+                .place("T2", ComponentType.RESERVOIR, 47, 55, "volume", 0.06)
+                .place("M1", ComponentType.PRIME_MOVER, 24, 50, "rated_power", 5500.0)
+                .place("P1", ComponentType.FIXED_PUMP, 36, 50)
+                .place("T1", ComponentType.RESERVOIR, 37, 58, "volume", 0.06)
+                .junction("JP", 36, 42).junction("JA1", 36, 28).junction("JA2", 36, 16)
                 .shaft("M1.shaft", "P1.shaft")
                 .ideal("T1.S", "P1.S", LineKind.SUCTION)
                 .ideal("P1.P", "JP", LineKind.PRESSURE)
                 .ideal("JP", "V1.P", LineKind.PRESSURE)
                 .ideal("JP", "G1.P", LineKind.PILOT)
                 .ideal("JP", "D1.P", LineKind.PRESSURE)
-                .ideal("V1.T", "JT", LineKind.RETURN)
-                .ideal("D1.T", "JT", LineKind.RETURN)
-                .ideal("JT", "T1.T", LineKind.RETURN)
+                .ideal("V1.T", "T2.T", LineKind.RETURN)
+                .ideal("D1.T", "T3.T", LineKind.RETURN)
                 .ideal("D1.A", "JA1", LineKind.PRESSURE)
                 .ideal("JA1", "F1.A", LineKind.PRESSURE)
                 .ideal("F1.B", "JA2", LineKind.PRESSURE)
                 .ideal("JA2", "C1.A", LineKind.PRESSURE)
                 .ideal("JA2", "K1.A", LineKind.PRESSURE)
                 .ideal("K1.B", "JA1", LineKind.PRESSURE)
-                .ideal("D1.B", "C1.B", LineKind.PRESSURE, new Point(14, 30), new Point(14, 8))
-                .note(26, 8, "Meter-in: F1 sets the pressing speed whatever the load; K1 lets the return oil bypass it.");
+                .ideal("D1.B", "C1.B", LineKind.PRESSURE)
+                .note(56, 8, "Meter-in: F1 sets the pressing speed whatever the load;\nK1 lets the return oil bypass it.\n"
+                        + "T1, T2 and T3 are the one reservoir.");
         String d = s.id("D1");
         String c = s.id("C1");
         List<OperatingState> states = List.of(
@@ -89,28 +91,31 @@ public final class DemoCircuits {
      */
     public static Circuit logSplitter() {
         Sketch s = new Sketch()
-                .place("T1", ComponentType.RESERVOIR, 10, 56, "volume", 0.04)
-                .place("E1", ComponentType.PRIME_MOVER, 2, 46, "kind", "engine", "speed", 50.0, "rated_power", 9000.0)
-                .place("P1", ComponentType.FIXED_PUMP, 10, 46, "displacement", 8e-6)
-                .place("V1", ComponentType.RELIEF_VALVE, 20, 46, "cracking_pressure", 200e5, "override", 0.0)
-                .place("D1", ComponentType.DIRECTIONAL_4_3, 10, 32, "centre", "tandem", "actuation", "manual")
-                .place("D2", ComponentType.DIRECTIONAL_3_2, 20, 22, "rated_flow", 80.0 / 60000)
-                .place("C1", ComponentType.DOUBLE_ACTING_CYLINDER, 10, 8, "bore", 0.1, "rod", 0.056, "stroke", 0.6)
-                .junction("JP", 10, 40).junction("JT", 18, 52).junction("JA", 8, 18)
+                .place("C1", ComponentType.DOUBLE_ACTING_CYLINDER, 40, 10, "bore", 0.1, "rod", 0.056, "stroke", 0.6)
+                .place("D2", ComponentType.DIRECTIONAL_3_2, 50, 24, "rated_flow", 80.0 / 60000)
+                .place("D1", ComponentType.DIRECTIONAL_4_3, 37, 34, "centre", "tandem", "actuation", "manual")
+                .place("T3", ComponentType.RESERVOIR, 43, 41, "volume", 0.04)
+                .place("V1", ComponentType.RELIEF_VALVE, 48, 47, "cracking_pressure", 200e5, "override", 0.0)
+                .turned(180)
+                .place("T2", ComponentType.RESERVOIR, 47, 55, "volume", 0.04)
+                .place("E1", ComponentType.PRIME_MOVER, 24, 50, "kind", "engine", "speed", 50.0, "rated_power", 9000.0)
+                .place("P1", ComponentType.FIXED_PUMP, 36, 50, "displacement", 8e-6)
+                .place("T1", ComponentType.RESERVOIR, 37, 58, "volume", 0.04)
+                .junction("JP", 36, 42).junction("JA", 36, 22)
                 .shaft("E1.shaft", "P1.shaft")
                 .ideal("T1.S", "P1.S", LineKind.SUCTION)
                 .ideal("P1.P", "JP", LineKind.PRESSURE)
                 .ideal("JP", "V1.P", LineKind.PRESSURE)
                 .ideal("JP", "D1.P", LineKind.PRESSURE)
-                .ideal("V1.T", "JT", LineKind.RETURN)
-                .ideal("D1.T", "JT", LineKind.RETURN)
-                .ideal("JT", "T1.T", LineKind.RETURN)
+                .ideal("V1.T", "T2.T", LineKind.RETURN)
+                .ideal("D1.T", "T3.T", LineKind.RETURN)
                 .ideal("D1.A", "JA", LineKind.PRESSURE)
                 .ideal("JA", "C1.A", LineKind.PRESSURE)
-                .ideal("JA", "D2.P", LineKind.PRESSURE, new Point(8, 22))
-                .ideal("C1.B", "D2.A", LineKind.PRESSURE, new Point(20, 8))
-                .ideal("D2.T", "D1.B", LineKind.PRESSURE, new Point(20, 28))
-                .note(28, 22, "D2 at a: rod-end oil joins the pump flow (regeneration), speed = Q/A_rod.");
+                .ideal("JA", "D2.P", LineKind.PRESSURE)
+                .ideal("C1.B", "D2.A", LineKind.PRESSURE)
+                .ideal("D2.T", "D1.B", LineKind.PRESSURE)
+                .note(60, 8, "D2 at a: rod-end oil joins the pump flow (regeneration),\nspeed = Q/A_rod.\n"
+                        + "T1, T2 and T3 are the one reservoir.");
         String d1 = s.id("D1");
         String d2 = s.id("D2");
         String c = s.id("C1");
@@ -134,15 +139,16 @@ public final class DemoCircuits {
      */
     public static Circuit capstanWinch() {
         Sketch s = new Sketch()
-                .place("T1", ComponentType.RESERVOIR, 10, 56, "volume", 0.1)
-                .place("M1", ComponentType.PRIME_MOVER, 2, 46, "rated_power", 11000.0)
-                .place("P1", ComponentType.FIXED_PUMP, 10, 46, "displacement", 20e-6)
-                .place("V1", ComponentType.RELIEF_VALVE, 20, 46, "cracking_pressure", 160e5, "override", 0.0,
-                        "rated_flow", 40.0 / 60000)
-                .place("X1", ComponentType.FILTER, 26, 52)
-                .place("D1", ComponentType.DIRECTIONAL_4_3, 10, 30, "centre", "tandem")
-                .place("H1", ComponentType.HYDRAULIC_MOTOR, 10, 10, "displacement", 50e-6)
-                .junction("JP", 10, 38).junction("JT", 18, 52)
+                .place("H1", ComponentType.HYDRAULIC_MOTOR, 37, 18, "displacement", 50e-6).turned(270)
+                .place("D1", ComponentType.DIRECTIONAL_4_3, 37, 34, "centre", "tandem")
+                .place("V1", ComponentType.RELIEF_VALVE, 48, 47, "cracking_pressure", 160e5, "override", 0.0,
+                        "rated_flow", 40.0 / 60000).turned(180)
+                .place("X1", ComponentType.FILTER, 58, 54)
+                .place("T2", ComponentType.RESERVOIR, 65, 59, "volume", 0.1)
+                .place("M1", ComponentType.PRIME_MOVER, 24, 50, "rated_power", 11000.0)
+                .place("P1", ComponentType.FIXED_PUMP, 36, 50, "displacement", 20e-6)
+                .place("T1", ComponentType.RESERVOIR, 37, 58, "volume", 0.1)
+                .junction("JP", 36, 42).junction("JT", 48, 54)
                 .shaft("M1.shaft", "P1.shaft")
                 .ideal("T1.S", "P1.S", LineKind.SUCTION)
                 .ideal("P1.P", "JP", LineKind.PRESSURE)
@@ -151,9 +157,10 @@ public final class DemoCircuits {
                 .ideal("V1.T", "JT", LineKind.RETURN)
                 .ideal("D1.T", "JT", LineKind.RETURN)
                 .ideal("JT", "X1.A", LineKind.RETURN)
-                .ideal("X1.B", "T1.T", LineKind.RETURN)
+                .ideal("X1.B", "T2.T", LineKind.RETURN)
                 .pipe("hoseA", "D1.A", "H1.A", 0.012, 3, LineKind.PRESSURE)
-                .pipe("hoseB", "H1.B", "D1.B", 0.012, 3, LineKind.PRESSURE, new Point(14, 10), new Point(14, 30));
+                .pipe("hoseB", "H1.B", "D1.B", 0.012, 3, LineKind.PRESSURE)
+                .note(60, 12, "Return oil passes filter X1; T1 and T2 are the one reservoir.");
         String d = s.id("D1");
         String h = s.id("H1");
         List<OperatingState> states = List.of(

@@ -44,6 +44,13 @@ final class Sketch {
         return this;
     }
 
+    /** Turns the last placed component clockwise by the given multiple of 90°. */
+    Sketch turned(int degrees) {
+        Component last = components.remove(components.size() - 1);
+        components.add(last.withRotation(degrees));
+        return this;
+    }
+
     Sketch junction(String name, double x, double y) {
         String id = "j" + (++next);
         ids.put(name, id);
