@@ -17,6 +17,7 @@ import spoolwork.model.Note;
 import spoolwork.model.OperatingState;
 import spoolwork.model.Point;
 import spoolwork.model.TitleBlock;
+import spoolwork.symbols.routing.AutoRoute;
 
 /** Draws an example circuit in code: components by tag at grid positions, lines between "TAG.PORT" ends. */
 final class Sketch {
@@ -93,6 +94,7 @@ final class Sketch {
     }
 
     Circuit build(TitleBlock title, Fluid fluid, List<OperatingState> states) {
-        return new Circuit(title, fluid, components, junctions, lines, notes, states);
+        // Lines are drawn without bends here; the shared router gives them orthogonal routes round the symbols.
+        return AutoRoute.routeUnbent(new Circuit(title, fluid, components, junctions, lines, notes, states));
     }
 }
