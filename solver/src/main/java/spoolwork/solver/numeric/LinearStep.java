@@ -28,10 +28,26 @@ final class LinearStep implements Jacobian {
     private int[] perm;
     private int[] inverse;
 
+    private final boolean[] eliminable;
+
     LinearStep(int n, LinearMethod method) {
+        this(n, method, null);
+    }
+
+    LinearStep(int n, LinearMethod method, NonlinearSystem s) {
         this.n = n;
         this.dense = method == LinearMethod.DENSE || (method == LinearMethod.AUTO && n <= LinearMethod.DENSE_LIMIT);
+        this.eliminable = new boolean[n];
+        if (s != null && !dense) {
+            for (int i = 0; i < n; i++) {
+                eliminable[i] = s.eliminable(i);
+            }
+        }
     }
+
+    // reduced numbering: kept unknowns 0 … m−1
+    private int[] keptIndex;
+    private int m = -1;
 
     void clear() {
         count = 0;
@@ -78,17 +94,156 @@ final class LinearStep implements Jacobian {
         return finite(x.data) ? x.data : null;
     }
 
+    /**
+     * Sparse path. Branch flows are eliminated first (static condensation, exact): their 1×1 pivots are the
+     * drop laws' slopes, which never vanish, and what is left is a nodal system about half the size.
+     */
     private double[] solveSparse(double[] rhs, double[] rowScale, double[] colScale) {
-        if (perm == null) {
-            perm = Ordering.reverseCuthillMcKee(n, rows, cols, count);
-            inverse = new int[n];
+        if (m < 0) {
+            keptIndex = new int[n];
+            m = 0;
             for (int i = 0; i < n; i++) {
+                keptIndex[i] = eliminable[i] ? -1 : m++;
+            }
+        }
+        double[] pivot = new double[n];
+        int[] rowCount = new int[n];
+        int[] colCount = new int[n];
+        for (int k = 0; k < count; k++) {
+            int r = rows[k];
+            int c = cols[k];
+            if (eliminable[r] && eliminable[c] && r != c) {
+                return solveSparseFull(rhs, rowScale, colScale);
+            }
+            if (eliminable[r] && r != c) {
+                rowCount[r]++;
+            } else if (eliminable[c] && r != c) {
+                colCount[c]++;
+            }
+        }
+        int[][] rowIdx = new int[n][];
+        double[][] rowVal = new double[n][];
+        int[][] colIdx = new int[n][];
+        double[][] colVal = new double[n][];
+        for (int i = 0; i < n; i++) {
+            if (eliminable[i]) {
+                rowIdx[i] = new int[rowCount[i]];
+                rowVal[i] = new double[rowCount[i]];
+                colIdx[i] = new int[colCount[i]];
+                colVal[i] = new double[colCount[i]];
+                rowCount[i] = 0;
+                colCount[i] = 0;
+            }
+        }
+        DMatrixSparseTriplet t = new DMatrixSparseTriplet(m, m, count);
+        double[] b = rhs.clone();
+        int[] tr = new int[count * 2];
+        int[] tc = new int[count * 2];
+        double[] tv = new double[count * 2];
+        int tn = 0;
+        for (int k = 0; k < count; k++) {
+            int r = rows[k];
+            int c = cols[k];
+            double v = vals[k] * colScale[c] / rowScale[r];
+            if (r == c && eliminable[r]) {
+                pivot[r] += v;
+            } else if (eliminable[r]) {
+                rowIdx[r][rowCount[r]] = c;
+                rowVal[r][rowCount[r]++] = v;
+            } else if (eliminable[c]) {
+                colIdx[c][colCount[c]] = r;
+                colVal[c][colCount[c]++] = v;
+            } else {
+                if (tn == tr.length) {
+                    tr = Arrays.copyOf(tr, tn * 2);
+                    tc = Arrays.copyOf(tc, tn * 2);
+                    tv = Arrays.copyOf(tv, tn * 2);
+                }
+                tr[tn] = keptIndex[r];
+                tc[tn] = keptIndex[c];
+                tv[tn++] = v;
+            }
+        }
+        for (int k = 0; k < n; k++) {
+            if (!eliminable[k]) {
+                continue;
+            }
+            double d = pivot[k];
+            if (!(Math.abs(d) > 1e-300)) {
+                return solveSparseFull(rhs, rowScale, colScale);
+            }
+            for (int a = 0; a < colIdx[k].length; a++) {
+                int i = colIdx[k][a];
+                double f = colVal[k][a] / d;
+                b[i] -= f * rhs[k];
+                for (int e = 0; e < rowIdx[k].length; e++) {
+                    if (tn == tr.length) {
+                        tr = Arrays.copyOf(tr, tn * 2);
+                        tc = Arrays.copyOf(tc, tn * 2);
+                        tv = Arrays.copyOf(tv, tn * 2);
+                    }
+                    tr[tn] = keptIndex[i];
+                    tc[tn] = keptIndex[rowIdx[k][e]];
+                    tv[tn++] = -f * rowVal[k][e];
+                }
+            }
+        }
+        if (perm == null) {
+            perm = Ordering.reverseCuthillMcKee(m, tr, tc, tn);
+            inverse = new int[m];
+            for (int i = 0; i < m; i++) {
                 inverse[perm[i]] = i;
+            }
+        }
+        for (int k = 0; k < tn; k++) {
+            t.addItem(inverse[tr[k]], inverse[tc[k]], tv[k]);
+        }
+        DMatrixSparseCSC a = DConvertMatrixStruct.convert(t, (DMatrixSparseCSC) null);
+        CommonOps_DSCC.duplicatesAdd(a, null);
+        LinearSolverSparse<DMatrixSparseCSC, DMatrixRMaj> lu = LinearSolverFactory_DSCC.lu(FillReducing.NONE);
+        if (!lu.setA(a)) {
+            return null;
+        }
+        DMatrixRMaj bb = new DMatrixRMaj(m, 1);
+        for (int i = 0; i < n; i++) {
+            if (!eliminable[i]) {
+                bb.data[inverse[keptIndex[i]]] = b[i];
+            }
+        }
+        DMatrixRMaj y = new DMatrixRMaj(m, 1);
+        lu.solve(bb, y);
+        double[] out = new double[n];
+        for (int i = 0; i < n; i++) {
+            if (!eliminable[i]) {
+                out[i] = y.data[inverse[keptIndex[i]]];
+            }
+        }
+        for (int k = 0; k < n; k++) {
+            if (eliminable[k]) {
+                double sum = rhs[k];
+                for (int e = 0; e < rowIdx[k].length; e++) {
+                    sum -= rowVal[k][e] * out[rowIdx[k][e]];
+                }
+                out[k] = sum / pivot[k];
+            }
+        }
+        return finite(out) ? out : null;
+    }
+
+    private int[] fullPerm;
+    private int[] fullInverse;
+
+    private double[] solveSparseFull(double[] rhs, double[] rowScale, double[] colScale) {
+        if (fullPerm == null) {
+            fullPerm = Ordering.reverseCuthillMcKee(n, rows, cols, count);
+            fullInverse = new int[n];
+            for (int i = 0; i < n; i++) {
+                fullInverse[fullPerm[i]] = i;
             }
         }
         DMatrixSparseTriplet t = new DMatrixSparseTriplet(n, n, count);
         for (int k = 0; k < count; k++) {
-            t.addItem(inverse[rows[k]], inverse[cols[k]], vals[k] * colScale[cols[k]] / rowScale[rows[k]]);
+            t.addItem(fullInverse[rows[k]], fullInverse[cols[k]], vals[k] * colScale[cols[k]] / rowScale[rows[k]]);
         }
         DMatrixSparseCSC a = DConvertMatrixStruct.convert(t, (DMatrixSparseCSC) null);
         CommonOps_DSCC.duplicatesAdd(a, null);
@@ -98,13 +253,13 @@ final class LinearStep implements Jacobian {
         }
         DMatrixRMaj b = new DMatrixRMaj(n, 1);
         for (int i = 0; i < n; i++) {
-            b.data[i] = rhs[perm[i]];
+            b.data[i] = rhs[fullPerm[i]];
         }
         DMatrixRMaj y = new DMatrixRMaj(n, 1);
         lu.solve(b, y);
         double[] out = new double[n];
         for (int i = 0; i < n; i++) {
-            out[perm[i]] = y.data[i];
+            out[fullPerm[i]] = y.data[i];
         }
         return finite(out) ? out : null;
     }
