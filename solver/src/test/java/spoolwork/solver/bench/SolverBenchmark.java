@@ -26,7 +26,7 @@ import spoolwork.solver.sample.CircuitGenerator;
 /**
  * Solve time of generated circuits of 10 … 2,000 components (sparse LU, the default path), and the time of
  * one Newton iteration with dense LU on the same equations for comparison. Iteration counts over 21
- * generated circuits per size are printed at set-up. Run with {@code mvn -B -Pbench -pl solver -am verify}.
+ * generated circuits per size are printed at set-up. Run with {@code mvn -B -Pbench -pl solver -am clean verify}.
  */
 @State(Scope.Benchmark)
 @Fork(value = 1, jvmArgs = {"-Xmx2g"})
