@@ -1,14 +1,13 @@
 package spoolwork.editor;
 
 import javafx.application.Application;
-import javafx.scene.Scene;
-import javafx.scene.control.Menu;
-import javafx.scene.control.MenuBar;
-import javafx.scene.layout.BorderPane;
-import javafx.scene.layout.Pane;
 import javafx.stage.Stage;
 
-/** The JavaFX application: the editor window. */
+import spoolwork.editor.files.FxDialogs;
+import spoolwork.editor.settings.EditorSettings;
+import spoolwork.editor.window.EditorWindow;
+
+/** The JavaFX application: one editor window, opening the file named on the command line if given. */
 public final class EditorMain extends Application {
 
     public static void launchEditor(String[] args) {
@@ -17,11 +16,8 @@ public final class EditorMain extends Application {
 
     @Override
     public void start(Stage stage) {
-        BorderPane root = new BorderPane();
-        root.setTop(new MenuBar(new Menu("File"), new Menu("Edit"), new Menu("View")));
-        root.setCenter(new Pane());
-        stage.setTitle("Spoolwork");
-        stage.setScene(new Scene(root, 1200, 800));
+        EditorWindow w = new EditorWindow(stage, EditorSettings.forUser(), new FxDialogs());
         stage.show();
+        w.openOnStart(getParameters().getRaw());
     }
 }

@@ -12,7 +12,8 @@ import picocli.CommandLine.Command;
  */
 @Command(name = "spoolwork", mixinStandardHelpOptions = true, version = "Spoolwork 0.1",
         description = "Draw hydraulic circuits and calculate them. With no command, opens the editor.",
-        subcommands = {CommandLine.HelpCommand.class, SolveCommand.class})
+        subcommands = {CommandLine.HelpCommand.class, SolveCommand.class, RenderCommand.class,
+                SymbolsCommand.class})
 public final class Cli implements Runnable {
 
     @Override

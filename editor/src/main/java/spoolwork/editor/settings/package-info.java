@@ -1,0 +1,2 @@
+/** What the editor remembers between runs (unit system, recent files). */
+package spoolwork.editor.settings;

@@ -1,0 +1,2 @@
+/** The editor window: menus, toolbar, panels and status bar around one document. */
+package spoolwork.editor.window;
