@@ -25,8 +25,6 @@ final class LinearStep implements Jacobian {
     private int[] cols = new int[256];
     private double[] vals = new double[256];
     private int count;
-    private int[] perm;
-    private int[] inverse;
 
     private final boolean[] eliminable;
 
@@ -45,9 +43,7 @@ final class LinearStep implements Jacobian {
         }
     }
 
-    // reduced numbering: kept unknowns 0 … m−1
-    private int[] keptIndex;
-    private int m = -1;
+
 
     void clear() {
         count = 0;
@@ -96,138 +92,250 @@ final class LinearStep implements Jacobian {
 
     /**
      * Sparse path. Branch flows are eliminated first (static condensation, exact): their 1×1 pivots are the
-     * drop laws' slopes, which never vanish, and what is left is a nodal system about half the size.
+     * drop laws' slopes, which never vanish, and what is left is a nodal system about half the size. The
+     * entries arrive in the same order every iteration, so where each one lands in the reduced matrix is
+     * worked out once and later iterations only fill in numbers.
      */
     private double[] solveSparse(double[] rhs, double[] rowScale, double[] colScale) {
-        if (m < 0) {
-            keptIndex = new int[n];
-            m = 0;
-            for (int i = 0; i < n; i++) {
-                keptIndex[i] = eliminable[i] ? -1 : m++;
-            }
-        }
-        double[] pivot = new double[n];
-        int[] rowCount = new int[n];
-        int[] colCount = new int[n];
-        for (int k = 0; k < count; k++) {
-            int r = rows[k];
-            int c = cols[k];
-            if (eliminable[r] && eliminable[c] && r != c) {
+        if (plan == null || !plan.fits(rows, cols, count)) {
+            plan = Plan.make(n, eliminable, rows, cols, count);
+            if (plan == null) {
                 return solveSparseFull(rhs, rowScale, colScale);
             }
-            if (eliminable[r] && r != c) {
-                rowCount[r]++;
-            } else if (eliminable[c] && r != c) {
-                colCount[c]++;
-            }
         }
-        int[][] rowIdx = new int[n][];
-        double[][] rowVal = new double[n][];
-        int[][] colIdx = new int[n][];
-        double[][] colVal = new double[n][];
-        for (int i = 0; i < n; i++) {
-            if (eliminable[i]) {
-                rowIdx[i] = new int[rowCount[i]];
-                rowVal[i] = new double[rowCount[i]];
-                colIdx[i] = new int[colCount[i]];
-                colVal[i] = new double[colCount[i]];
-                rowCount[i] = 0;
-                colCount[i] = 0;
-            }
-        }
-        DMatrixSparseTriplet t = new DMatrixSparseTriplet(m, m, count);
-        double[] b = rhs.clone();
-        int[] tr = new int[count * 2];
-        int[] tc = new int[count * 2];
-        double[] tv = new double[count * 2];
-        int tn = 0;
+        Plan pl = plan;
+        double[] pivot = new double[n];
+        double[] rowVal = new double[pl.rowSlots];
+        double[] colVal = new double[pl.colSlots];
+        DMatrixSparseCSC a = pl.matrix.copy();
+        double[] nz = a.nz_values;
+        java.util.Arrays.fill(nz, 0, a.nz_length, 0);
         for (int k = 0; k < count; k++) {
-            int r = rows[k];
-            int c = cols[k];
-            double v = vals[k] * colScale[c] / rowScale[r];
-            if (r == c && eliminable[r]) {
-                pivot[r] += v;
-            } else if (eliminable[r]) {
-                rowIdx[r][rowCount[r]] = c;
-                rowVal[r][rowCount[r]++] = v;
-            } else if (eliminable[c]) {
-                colIdx[c][colCount[c]] = r;
-                colVal[c][colCount[c]++] = v;
-            } else {
-                if (tn == tr.length) {
-                    tr = Arrays.copyOf(tr, tn * 2);
-                    tc = Arrays.copyOf(tc, tn * 2);
-                    tv = Arrays.copyOf(tv, tn * 2);
-                }
-                tr[tn] = keptIndex[r];
-                tc[tn] = keptIndex[c];
-                tv[tn++] = v;
+            double v = vals[k] * colScale[cols[k]] / rowScale[rows[k]];
+            int d = pl.dest[k];
+            switch (pl.role[k]) {
+                case Plan.PIVOT -> pivot[rows[k]] += v;
+                case Plan.ROW -> rowVal[d] = v;
+                case Plan.COL -> colVal[d] = v;
+                default -> nz[d] += v;
             }
         }
-        for (int k = 0; k < n; k++) {
-            if (!eliminable[k]) {
-                continue;
-            }
+        double[] b = rhs.clone();
+        int f = 0;
+        for (int e = 0; e < pl.elim.length; e++) {
+            int k = pl.elim[e];
             double d = pivot[k];
             if (!(Math.abs(d) > 1e-300)) {
                 return solveSparseFull(rhs, rowScale, colScale);
             }
-            for (int a = 0; a < colIdx[k].length; a++) {
-                int i = colIdx[k][a];
-                double f = colVal[k][a] / d;
-                b[i] -= f * rhs[k];
-                for (int e = 0; e < rowIdx[k].length; e++) {
-                    if (tn == tr.length) {
-                        tr = Arrays.copyOf(tr, tn * 2);
-                        tc = Arrays.copyOf(tc, tn * 2);
-                        tv = Arrays.copyOf(tv, tn * 2);
-                    }
-                    tr[tn] = keptIndex[i];
-                    tc[tn] = keptIndex[rowIdx[k][e]];
-                    tv[tn++] = -f * rowVal[k][e];
+            for (int c = pl.colStart[e]; c < pl.colStart[e + 1]; c++) {
+                double factor = colVal[c] / d;
+                b[pl.colRow[c]] -= factor * rhs[k];
+                for (int r = pl.rowStart[e]; r < pl.rowStart[e + 1]; r++) {
+                    nz[pl.fill[f++]] -= factor * rowVal[r];
                 }
             }
         }
-        if (perm == null) {
-            perm = Ordering.reverseCuthillMcKee(m, tr, tc, tn);
-            inverse = new int[m];
-            for (int i = 0; i < m; i++) {
-                inverse[perm[i]] = i;
-            }
-        }
-        for (int k = 0; k < tn; k++) {
-            t.addItem(inverse[tr[k]], inverse[tc[k]], tv[k]);
-        }
-        DMatrixSparseCSC a = DConvertMatrixStruct.convert(t, (DMatrixSparseCSC) null);
-        CommonOps_DSCC.duplicatesAdd(a, null);
         LinearSolverSparse<DMatrixSparseCSC, DMatrixRMaj> lu = LinearSolverFactory_DSCC.lu(FillReducing.NONE);
         if (!lu.setA(a)) {
             return null;
         }
+        int m = pl.m;
         DMatrixRMaj bb = new DMatrixRMaj(m, 1);
         for (int i = 0; i < n; i++) {
-            if (!eliminable[i]) {
-                bb.data[inverse[keptIndex[i]]] = b[i];
+            if (pl.place[i] >= 0) {
+                bb.data[pl.place[i]] = b[i];
             }
         }
         DMatrixRMaj y = new DMatrixRMaj(m, 1);
         lu.solve(bb, y);
         double[] out = new double[n];
         for (int i = 0; i < n; i++) {
-            if (!eliminable[i]) {
-                out[i] = y.data[inverse[keptIndex[i]]];
+            if (pl.place[i] >= 0) {
+                out[i] = y.data[pl.place[i]];
             }
         }
-        for (int k = 0; k < n; k++) {
-            if (eliminable[k]) {
-                double sum = rhs[k];
-                for (int e = 0; e < rowIdx[k].length; e++) {
-                    sum -= rowVal[k][e] * out[rowIdx[k][e]];
-                }
-                out[k] = sum / pivot[k];
+        for (int e = 0; e < pl.elim.length; e++) {
+            int k = pl.elim[e];
+            double sum = rhs[k];
+            for (int r = pl.rowStart[e]; r < pl.rowStart[e + 1]; r++) {
+                sum -= rowVal[r] * out[pl.rowCol[r]];
             }
+            out[k] = sum / pivot[k];
         }
         return finite(out) ? out : null;
+    }
+
+    private Plan plan;
+
+    /** Where each Jacobian entry goes in the condensed, renumbered sparse matrix. */
+    private static final class Plan {
+        static final byte KEPT = 0;
+        static final byte PIVOT = 1;
+        static final byte ROW = 2;
+        static final byte COL = 3;
+
+        int[] rowsSeen;
+        int[] colsSeen;
+        int m;
+        /** Position of each kept unknown in the factorised matrix (after renumbering); −1 if eliminated. */
+        int[] place;
+        byte[] role;
+        int[] dest;
+        int[] elim;
+        int[] rowStart;
+        int[] rowCol;
+        int[] colStart;
+        int[] colRow;
+        int[] fill;
+        int rowSlots;
+        int colSlots;
+        DMatrixSparseCSC matrix;
+
+        boolean fits(int[] rows, int[] cols, int count) {
+            if (count != rowsSeen.length) {
+                return false;
+            }
+            for (int k = 0; k < count; k++) {
+                if (rows[k] != rowsSeen[k] || cols[k] != colsSeen[k]) {
+                    return false;
+                }
+            }
+            return true;
+        }
+
+        static Plan make(int n, boolean[] eliminable, int[] rows, int[] cols, int count) {
+            Plan p = new Plan();
+            p.rowsSeen = Arrays.copyOf(rows, count);
+            p.colsSeen = Arrays.copyOf(cols, count);
+            int[] kept = new int[n];
+            int m = 0;
+            int[] elimPos = new int[n];
+            int ne = 0;
+            for (int i = 0; i < n; i++) {
+                kept[i] = eliminable[i] ? -1 : m++;
+                elimPos[i] = eliminable[i] ? ne++ : -1;
+            }
+            p.m = m;
+            p.elim = new int[ne];
+            for (int i = 0; i < n; i++) {
+                if (eliminable[i]) {
+                    p.elim[elimPos[i]] = i;
+                }
+            }
+            int[] rc = new int[ne + 1];
+            int[] cc = new int[ne + 1];
+            p.role = new byte[count];
+            for (int k = 0; k < count; k++) {
+                int r = rows[k];
+                int c = cols[k];
+                if (eliminable[r] && eliminable[c] && r != c) {
+                    return null;
+                }
+                if (r == c && eliminable[r]) {
+                    p.role[k] = PIVOT;
+                } else if (eliminable[r]) {
+                    p.role[k] = ROW;
+                    rc[elimPos[r] + 1]++;
+                } else if (eliminable[c]) {
+                    p.role[k] = COL;
+                    cc[elimPos[c] + 1]++;
+                }
+            }
+            for (int e = 0; e < ne; e++) {
+                rc[e + 1] += rc[e];
+                cc[e + 1] += cc[e];
+            }
+            p.rowStart = rc;
+            p.colStart = cc;
+            p.rowSlots = rc[ne];
+            p.colSlots = cc[ne];
+            p.rowCol = new int[p.rowSlots];
+            p.colRow = new int[p.colSlots];
+            p.dest = new int[count];
+            int[] rf = Arrays.copyOf(rc, ne);
+            int[] cf = Arrays.copyOf(cc, ne);
+            for (int k = 0; k < count; k++) {
+                if (p.role[k] == ROW) {
+                    int e = elimPos[rows[k]];
+                    p.dest[k] = rf[e];
+                    p.rowCol[rf[e]++] = cols[k];
+                } else if (p.role[k] == COL) {
+                    int e = elimPos[cols[k]];
+                    p.dest[k] = cf[e];
+                    p.colRow[cf[e]++] = rows[k];
+                }
+            }
+            // pattern of the condensed matrix: kept entries and fill-ins, in kept numbering
+            int fills = 0;
+            for (int e = 0; e < ne; e++) {
+                fills += (cc[e + 1] - cc[e]) * (rc[e + 1] - rc[e]);
+            }
+            int total = 0;
+            int[] pr = new int[count + fills];
+            int[] pc = new int[count + fills];
+            for (int k = 0; k < count; k++) {
+                if (p.role[k] == KEPT) {
+                    pr[total] = kept[rows[k]];
+                    pc[total++] = kept[cols[k]];
+                }
+            }
+            int keptEntries = total;
+            for (int e = 0; e < ne; e++) {
+                for (int c = cc[e]; c < cc[e + 1]; c++) {
+                    for (int r = rc[e]; r < rc[e + 1]; r++) {
+                        pr[total] = kept[p.colRow[c]];
+                        pc[total++] = kept[p.rowCol[r]];
+                    }
+                }
+            }
+            int[] perm = Ordering.reverseCuthillMcKee(m, pr, pc, total);
+            int[] inverse = new int[m];
+            for (int i = 0; i < m; i++) {
+                inverse[perm[i]] = i;
+            }
+            p.place = new int[n];
+            for (int i = 0; i < n; i++) {
+                p.place[i] = kept[i] < 0 ? -1 : inverse[kept[i]];
+            }
+            // unique (column, row) pairs in the new numbering, as CSC
+            long[] keys = new long[total];
+            for (int t = 0; t < total; t++) {
+                keys[t] = (long) inverse[pc[t]] * m + inverse[pr[t]];
+            }
+            long[] sorted = keys.clone();
+            Arrays.sort(sorted);
+            int unique = 0;
+            for (int t = 0; t < total; t++) {
+                if (t == 0 || sorted[t] != sorted[t - 1]) {
+                    sorted[unique++] = sorted[t];
+                }
+            }
+            DMatrixSparseCSC a = new DMatrixSparseCSC(m, m, unique);
+            a.nz_length = unique;
+            for (int t = 0; t < unique; t++) {
+                int col = (int) (sorted[t] / m);
+                a.nz_rows[t] = (int) (sorted[t] % m);
+                a.col_idx[col + 1]++;
+            }
+            for (int c = 0; c < m; c++) {
+                a.col_idx[c + 1] += a.col_idx[c];
+            }
+            a.indicesSorted = true;
+            p.matrix = a;
+            long[] uniq = Arrays.copyOf(sorted, unique);
+            int t = 0;
+            for (int k = 0; k < count; k++) {
+                if (p.role[k] == KEPT) {
+                    p.dest[k] = Arrays.binarySearch(uniq, keys[t++]);
+                }
+            }
+            p.fill = new int[fills];
+            for (int q = 0; q < fills; q++) {
+                p.fill[q] = Arrays.binarySearch(uniq, keys[keptEntries + q]);
+            }
+            return p;
+        }
     }
 
     private int[] fullPerm;
