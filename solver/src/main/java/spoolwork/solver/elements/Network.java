@@ -168,6 +168,11 @@ public final class Network implements NonlinearSystem {
     }
 
     @Override
+    public boolean eliminable(int i) {
+        return kinds.get(i) == Kind.FLOW;
+    }
+
+    @Override
     public boolean isPressure(int i) {
         return kinds.get(i) == Kind.PRESSURE;
     }

@@ -36,7 +36,7 @@ public final class Newton {
             rowScale[i] = s.rowScale(i);
             colScale[i] = s.unknownScale(i);
         }
-        LinearStep lin = new LinearStep(n, method);
+        LinearStep lin = new LinearStep(n, method, s);
         s.evaluate(x, f, lin);
         if (!finite(f)) {
             return new Result(x0.clone(), false, 0, "residual not finite at the start", worst(s, f));

@@ -21,4 +21,13 @@ public interface NonlinearSystem {
 
     /** True when unknown i is a pressure, whose Newton steps are limited. */
     boolean isPressure(int i);
+
+    /**
+     * True when unknown i may be eliminated before the sparse factorisation: its row holds only itself and
+     * unknowns that are never eliminated, its column appears only in such rows, and its own derivative
+     * never vanishes (a branch flow with a strictly increasing drop law).
+     */
+    default boolean eliminable(int i) {
+        return false;
+    }
 }

@@ -17,7 +17,6 @@ import org.openjdk.jmh.annotations.State;
 import org.openjdk.jmh.annotations.Warmup;
 
 import spoolwork.model.Circuit;
-import spoolwork.model.OperatingState;
 import spoolwork.solver.Solution;
 import spoolwork.solver.SolverOptions;
 import spoolwork.solver.SteadyStateSolver;
@@ -27,26 +26,29 @@ import spoolwork.solver.sample.CircuitGenerator;
 /**
  * Solve time of generated circuits of 10 … 2,000 components (sparse LU, the default path), and the time of
  * one Newton iteration with dense LU on the same equations for comparison. Iteration counts over 21
- * generated circuits per size are printed at set-up. Run with {@code mvn -B -Pbench -pl solver -am verify}.
+ * generated circuits per size are printed at set-up. Run with {@code mvn -B -Pbench -pl solver -am clean verify}.
  */
 @State(Scope.Benchmark)
 @Fork(value = 1, jvmArgs = {"-Xmx2g"})
 @Warmup(iterations = 3, time = 1)
-@Measurement(iterations = 5, time = 2)
+@Measurement(iterations = 5, time = 3)
 @BenchmarkMode(Mode.SampleTime)
 @OutputTimeUnit(TimeUnit.MILLISECONDS)
 public class SolverBenchmark {
     @Param({"10", "100", "1000", "2000"})
     public int components;
 
-    Circuit circuit;
-    OperatingState state;
+    /** Eight generated circuits of the size, solved in turn, so the median is over typical cases. */
+    Circuit[] circuits;
+    int next;
     SteadyStateSolver sparse;
 
     @Setup(Level.Trial)
     public void setUp() {
-        circuit = CircuitGenerator.generate(components, 7);
-        state = circuit.states().get(0);
+        circuits = new Circuit[8];
+        for (int i = 0; i < circuits.length; i++) {
+            circuits[i] = CircuitGenerator.generate(components, 100 + i);
+        }
         sparse = new SteadyStateSolver(SolverOptions.defaults().withLinearMethod(LinearMethod.SPARSE)
                 .withTimeLimit(60));
         int[] its = new int[21];
@@ -64,6 +66,7 @@ public class SolverBenchmark {
 
     @Benchmark
     public Solution solveSparse() {
-        return sparse.solve(circuit, state);
+        Circuit c = circuits[next++ & 7];
+        return sparse.solve(c, c.states().get(0));
     }
 }

@@ -1,0 +1,2 @@
+/** Generated circuits for benchmarks and robustness checks. */
+package spoolwork.solver.sample;
