@@ -227,6 +227,7 @@ public final class SteadyStateSolver {
             }
         }
         Map<String, LineResult> lines = lineResults(eq, x, portFlowInto);
+        reservoirPortFlows(circuit, lines, comps);
         double pumpLoss = pumpInput - pumpHydraulic;
         PowerBalance balance = new PowerBalance(pumpInput, pumpHydraulic, power.get(PowerKind.USEFUL),
                 power.get(PowerKind.RELIEF), power.get(PowerKind.THROTTLE), power.get(PowerKind.LINE),
@@ -281,6 +282,38 @@ public final class SteadyStateSolver {
             }
             default -> {
             }
+        }
+    }
+
+    /**
+     * A reservoir has no element law (its ports are the reference pressure), so the flow into each of its
+     * ports is what its lines carry to it: a line's flow counts positive towards its end.
+     */
+    private static void reservoirPortFlows(Circuit circuit, Map<String, LineResult> lines,
+                                           Map<String, ComponentResult> comps) {
+        for (Component c : circuit.components()) {
+            if (c.type() != ComponentType.RESERVOIR) {
+                continue;
+            }
+            ComponentResult r = comps.get(c.tag());
+            Map<String, PortResult> ports = new LinkedHashMap<>();
+            for (Map.Entry<String, PortResult> e : r.ports().entrySet()) {
+                double in = 0;
+                for (Line l : circuit.linesAt(c.id())) {
+                    LineResult lr = lines.get(l.id());
+                    if (lr == null) {
+                        continue;
+                    }
+                    if (l.to().equals(spoolwork.model.Endpoint.port(c.id(), e.getKey()))) {
+                        in += lr.flow();
+                    }
+                    if (l.from().equals(spoolwork.model.Endpoint.port(c.id(), e.getKey()))) {
+                        in -= lr.flow();
+                    }
+                }
+                ports.put(e.getKey(), new PortResult(e.getValue().pressure(), in));
+            }
+            comps.put(c.tag(), new ComponentResult(c.id(), c.tag(), c.type(), ports, r.values()));
         }
     }
 

@@ -68,6 +68,11 @@ class HandWorkedCircuitsTest {
         assertEquals(s.power().pumpHydraulic(), s.power().relief() + s.power().throttle() + s.power().useful()
                 + s.power().leakage(), 1e-3);
         assertEquals(0.5 / (1.6667e-4 / area), s.value("C1", "stroke_time_s"), 0.01);
+        // Continuity at the reservoir (flow positive into a port): the suction port gives the pump its 3.7313e-4;
+        // the return port takes the relief flow plus the rod-end oil A_ann·v = π/4·(0.063² − 0.036²)·0.053466
+        // = 1.1225e-4, so 2.0647e-4 + 1.1225e-4 = 3.1872e-4 m³/s.
+        assertEquals(-3.7313e-4, s.flow("T1", "S"), 1e-7);
+        assertEquals(3.1872e-4, s.flow("T1", "T"), 1e-7);
     }
 
     @Test

@@ -212,8 +212,8 @@ public final class SolveCommand implements Callable<Integer> {
                     sb.append("         ");
                     for (Map.Entry<String, PortResult> p : c.ports().entrySet()) {
                         sb.append(' ').append(p.getKey()).append(": ")
-                                .append(Units.format(p.getValue().pressure(), Quantity.PRESSURE, u)).append(", ")
-                                .append(Units.format(p.getValue().flow(), Quantity.FLOW, u)).append(" in;");
+                                .append(shown(p.getValue().pressure(), Quantity.PRESSURE, u)).append(", ")
+                                .append(shown(p.getValue().flow(), Quantity.FLOW, u)).append(" in;");
                     }
                     sb.setLength(sb.length() - 1);
                     sb.append('\n');
@@ -227,9 +227,9 @@ public final class SolveCommand implements Callable<Integer> {
             sb.append("Lines (flow positive from start to end)\n");
             for (LineResult l : s.lines().values()) {
                 sb.append(String.format(Locale.ROOT, "  %-6s %s, %s → %s, %s, Re %s%n", l.id(),
-                        Units.format(l.flow(), Quantity.FLOW, u), Units.format(l.pressureStart(), Quantity.PRESSURE, u),
-                        Units.format(l.pressureEnd(), Quantity.PRESSURE, u),
-                        Units.format(l.velocity(), Quantity.VELOCITY, u), Units.number(l.reynolds(), 4)));
+                        shown(l.flow(), Quantity.FLOW, u), shown(l.pressureStart(), Quantity.PRESSURE, u),
+                        shown(l.pressureEnd(), Quantity.PRESSURE, u),
+                        shown(l.velocity(), Quantity.VELOCITY, u), Units.number(Math.abs(l.reynolds()) < 1e-3 ? 0 : l.reynolds(), 4)));
             }
             PowerBalance p = s.power();
             sb.append("Power\n");
@@ -247,7 +247,22 @@ public final class SolveCommand implements Callable<Integer> {
     }
 
     private static String w(double watts, UnitSystem u) {
-        return Units.format(watts, Quantity.POWER, u);
+        return shown(watts, Quantity.POWER, u);
+    }
+
+    /**
+     * Round-off within the solver's tolerances around zero (a shut valve's 1e-13 m³/s, the heat it then
+     * makes) reads as zero; the floors lie far below anything a gauge or flow meter could show.
+     */
+    static String shown(double v, Quantity q, UnitSystem u) {
+        double floor = switch (q) {
+            case FLOW -> 1e-10;
+            case PRESSURE -> 1e-2;
+            case VELOCITY -> 1e-8;
+            case POWER -> 1e-6;
+            default -> 0;
+        };
+        return Units.format(Math.abs(v) < floor ? 0 : v, q, u);
     }
 
     private static String label(String key) {
@@ -262,10 +277,6 @@ public final class SolveCommand implements Callable<Integer> {
     }
 
     private static String value(String key, double v, UnitSystem u) {
-        // round-off within the solver's tolerance around zero (a shut valve's 1e-13 m³/s) reads as zero
-        if (Math.abs(v) < 1e-10 && (key.endsWith("_m3s") || key.endsWith("_mps") || key.endsWith("_w"))) {
-            v = 0;
-        }
         Quantity q = null;
         if (key.endsWith("_pa")) {
             q = Quantity.PRESSURE;
@@ -285,7 +296,7 @@ public final class SolveCommand implements Callable<Integer> {
             q = Quantity.VOLUME;
         }
         if (q != null) {
-            return Units.format(v, q, u);
+            return shown(v, q, u);
         }
         if (key.endsWith("_rpm")) {
             return Units.number(v, 4) + " rpm";
