@@ -43,7 +43,7 @@ public final class DemoCircuits {
                 .place("F1", ComponentType.FLOW_CONTROL, 36, 22, "set_flow", 10.0 / 60000).turned(270)
                 .place("D1", ComponentType.DIRECTIONAL_4_3, 37, 34, "centre", "tandem")
                 .place("T3", ComponentType.RESERVOIR, 43, 41, "volume", 0.06)
-                .place("G1", ComponentType.PRESSURE_GAUGE, 28, 38)
+                .place("G1", ComponentType.PRESSURE_GAUGE, 27, 40)
                 .place("V1", ComponentType.RELIEF_VALVE, 48, 47, "cracking_pressure", 100e5, "override", 0.0)
                 .turned(180)
                 .place("T2", ComponentType.RESERVOIR, 47, 55, "volume", 0.06)
