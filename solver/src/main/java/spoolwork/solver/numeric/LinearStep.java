@@ -49,6 +49,50 @@ final class LinearStep implements Jacobian {
         count = 0;
     }
 
+    private int[] spareRows = new int[256];
+    private int[] spareCols = new int[256];
+    private double[] spareVals = new double[256];
+    private int spareCount;
+
+    /**
+     * A second, empty set of entries for a trial point of the line search, so that the accepted trial's
+     * Jacobian is kept (by {@link #acceptSpare()}) instead of evaluating the system again there.
+     */
+    Jacobian spare() {
+        spareCount = 0;
+        return spareSink;
+    }
+
+    private final Jacobian spareSink = (row, col, value) -> {
+            if (row < 0 || col < 0) {
+                return;
+            }
+            if (spareCount == spareRows.length) {
+                spareRows = Arrays.copyOf(spareRows, spareCount * 2);
+                spareCols = Arrays.copyOf(spareCols, spareCount * 2);
+                spareVals = Arrays.copyOf(spareVals, spareCount * 2);
+            }
+            spareRows[spareCount] = row;
+            spareCols[spareCount] = col;
+            spareVals[spareCount] = value;
+            spareCount++;
+    };
+
+    /** Makes the entries last written through {@link #spare()} the current ones. */
+    void acceptSpare() {
+        int[] r = rows;
+        int[] c = cols;
+        double[] v = vals;
+        rows = spareRows;
+        cols = spareCols;
+        vals = spareVals;
+        count = spareCount;
+        spareRows = r;
+        spareCols = c;
+        spareVals = v;
+        spareCount = 0;
+    }
+
     @Override
     public void add(int row, int col, double value) {
         if (row < 0 || col < 0) {
@@ -99,6 +143,7 @@ final class LinearStep implements Jacobian {
     private double[] solveSparse(double[] rhs, double[] rowScale, double[] colScale) {
         if (plan == null || !plan.fits(rows, cols, count)) {
             plan = Plan.make(n, eliminable, rows, cols, count);
+            work = null;
             if (plan == null) {
                 return solveSparseFull(rhs, rowScale, colScale);
             }
@@ -107,7 +152,10 @@ final class LinearStep implements Jacobian {
         double[] pivot = new double[n];
         double[] rowVal = new double[pl.rowSlots];
         double[] colVal = new double[pl.colSlots];
-        DMatrixSparseCSC a = pl.matrix.copy();
+        if (work == null) {
+            work = pl.matrix.copy();
+        }
+        DMatrixSparseCSC a = work;
         double[] nz = a.nz_values;
         java.util.Arrays.fill(nz, 0, a.nz_length, 0);
         for (int k = 0; k < count; k++) {
@@ -136,7 +184,10 @@ final class LinearStep implements Jacobian {
                 }
             }
         }
-        LinearSolverSparse<DMatrixSparseCSC, DMatrixRMaj> lu = LinearSolverFactory_DSCC.lu(FillReducing.NONE);
+        if (condensedLu == null) {
+            condensedLu = LinearSolverFactory_DSCC.lu(FillReducing.NONE);
+        }
+        LinearSolverSparse<DMatrixSparseCSC, DMatrixRMaj> lu = condensedLu;
         if (!lu.setA(a)) {
             return null;
         }
@@ -167,6 +218,9 @@ final class LinearStep implements Jacobian {
     }
 
     private Plan plan;
+    /** The condensed matrix of the current plan, refilled every iteration; its LU keeps its workspaces. */
+    private DMatrixSparseCSC work;
+    private LinearSolverSparse<DMatrixSparseCSC, DMatrixRMaj> condensedLu;
 
     /** Where each Jacobian entry goes in the condensed, renumbered sparse matrix. */
     private static final class Plan {

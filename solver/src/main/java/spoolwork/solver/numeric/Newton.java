@@ -86,7 +86,7 @@ public final class Newton {
                 for (int i = 0; i < n; i++) {
                     xt[i] = x[i] + alpha * dir[i];
                 }
-                s.evaluate(xt, ft, null);
+                s.evaluate(xt, ft, lin.spare());
                 if (finite(ft)) {
                     double mt = merit(ft, rowScale);
                     // non-monotone Armijo test against the worst of the last few merits (Grippo et al. 1986)
@@ -108,7 +108,7 @@ public final class Newton {
                 for (int i = 0; i < n; i++) {
                     xt[i] = x[i] + dir[i];
                 }
-                s.evaluate(xt, ft, null);
+                s.evaluate(xt, ft, lin.spare());
                 if (finite(ft)) {
                     accepted = true;
                     alpha = 1;
@@ -121,12 +121,13 @@ public final class Newton {
             if (TRACE) {
                 System.err.printf("it %d alpha %.3g step %.3g merit %.3g%n", it, alpha, stepNorm, merit);
             }
+            // the accepted trial already holds F and the Jacobian at the new iterate
             System.arraycopy(xt, 0, x, 0, n);
-            lin.clear();
-            s.evaluate(x, f, lin);
+            double[] swap = f;
+            f = ft;
+            ft = swap;
+            lin.acceptSpare();
             if (within(s, f) && alpha * stepNorm <= STEP_TOLERANCE) {
-                lin.clear();
-                s.evaluate(x, f, lin);
                 double[] last = lin.solve(negScaled(f, rowScale), rowScale, colScale);
                 return new Result(last == null ? x : polish(s, x, f, last, colScale, rowScale), true, it + 2, null, -1);
             }
