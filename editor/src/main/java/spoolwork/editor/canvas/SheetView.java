@@ -125,6 +125,18 @@ public final class SheetView extends Region {
     /** What a primary press does on the sheet. */
     public enum Tool { SELECT, PLACE, NOTE }
 
+    /** Removes from the layer, and forgets, every view whose element is no longer in the drawing. */
+    private static <V> void dropStale(Map<String, V> views, Set<String> seen, Group layer,
+                                      java.util.function.Function<V, Node> node) {
+        views.keySet().removeIf(id -> {
+            if (!seen.contains(id)) {
+                layer.getChildren().remove(node.apply(views.get(id)));
+                return true;
+            }
+            return false;
+        });
+    }
+
     private record CompView(Component value, Group node) {
     }
 
@@ -419,13 +431,7 @@ public final class SheetView extends Region {
             lineLayer.getChildren().add(nv.node);
             lines.put(l.id(), nv);
         }
-        lines.keySet().removeIf(id -> {
-            if (!seen.contains(id)) {
-                lineLayer.getChildren().remove(lines.get(id).node);
-                return true;
-            }
-            return false;
-        });
+        dropStale(lines, seen, lineLayer, v -> v.node);
 
         seen.clear();
         for (Junction j : c.junctions()) {
@@ -443,13 +449,7 @@ public final class SheetView extends Region {
             }
             junctions.put(j.id(), new JunctionView(j, dot));
         }
-        junctions.keySet().removeIf(id -> {
-            if (!seen.contains(id)) {
-                junctionLayer.getChildren().remove(junctions.get(id).node);
-                return true;
-            }
-            return false;
-        });
+        dropStale(junctions, seen, junctionLayer, v -> v.node);
 
         seen.clear();
         for (Note n : c.notes()) {
@@ -470,13 +470,7 @@ public final class SheetView extends Region {
             }
             notes.put(n.id(), new NoteView(n, t));
         }
-        notes.keySet().removeIf(id -> {
-            if (!seen.contains(id)) {
-                noteLayer.getChildren().remove(notes.get(id).node);
-                return true;
-            }
-            return false;
-        });
+        dropStale(notes, seen, noteLayer, v -> v.node);
         syncFrame(c);
         placeOverlay();
         markSelection();
