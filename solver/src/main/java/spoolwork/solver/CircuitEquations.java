@@ -218,7 +218,7 @@ final class CircuitEquations {
                 Pump p = new Pump(t, node(c, "S"), node(c, "P"), drain, c.param("displacement"),
                         pumpSpeeds.get(c.id()), c.param("volumetric_efficiency"), c.param("overall_efficiency"),
                         c.param("reference_pressure"), comp, comp ? c.param("compensator_setting") : 0,
-                        comp ? c.param("compensator_band") : 1);
+                        comp ? c.param("compensator_band") : 1, net);
                 pumps.put(c.id(), p);
                 es.add(p);
             }

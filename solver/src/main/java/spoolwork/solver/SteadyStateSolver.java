@@ -27,8 +27,9 @@ import spoolwork.solver.topology.TopologyCheck;
  * Computes the steady operating point of a whole circuit in one operating state.
  *
  * <p>First a topology check; an error there stops the solve with its diagnostic. Then Newton's method on
- * the whole system from rest; if it fails, gmin stepping (a conductance from every node to the reservoir,
- * stepped down to nothing), then source stepping (pump flow raised from 10 % to full). Time and iteration
+ * the whole system from rest; if it fails, a leaky start (two steps with a conductance from every node to
+ * the reservoir, then plain Newton), then gmin stepping (that conductance stepped down to nothing), then
+ * source stepping (pump flow raised from 10 % to full). Time and iteration
  * limits apply throughout; a failure is reported with the rows furthest from balance.
  */
 public final class SteadyStateSolver {
@@ -71,6 +72,13 @@ public final class SteadyStateSolver {
         Newton.Result r = newton.solve(net, x0, deadline);
         int iterations = r.iterations();
         if (!r.converged() && options.continuation()) {
+            Newton.Result w = leakyStart(net, deadline);
+            iterations += w.iterations();
+            if (w.converged()) {
+                r = w;
+            }
+        }
+        if (!r.converged() && options.continuation()) {
             Newton.Result g = gminStepping(net, newton, deadline);
             iterations += g.iterations();
             if (!g.converged()) {
@@ -88,6 +96,24 @@ public final class SteadyStateSolver {
             return Solution.failed(state.name(), iterations, diagnostics);
         }
         return results(eq, state, r.x(), iterations, diagnostics);
+    }
+
+    /** Conductance to the reservoir, per unit of flowRef/pressureRef, in the first steps of a leaky start. */
+    private static final double LEAKY_START_CONDUCTANCE = 0.1;
+    private static final int LEAKY_START_ITERATIONS = 2;
+
+    /**
+     * Second try: two Newton steps with a leak from every node to the reservoir, so that the first linear
+     * model of a circuit whose valves all start shut puts every pressure near the circuit's settings
+     * instead of at the absurd values a dead-headed pump would give; then plain Newton from there.
+     */
+    private Newton.Result leakyStart(Network net, long deadline) {
+        net.setExtraConductance(LEAKY_START_CONDUCTANCE * net.flowRef() / net.pressureRef());
+        Newton.Result w = new Newton(options.linearMethod(), LEAKY_START_ITERATIONS)
+                .solve(net, net.initialGuess(), deadline);
+        net.setExtraConductance(0);
+        Newton.Result r = new Newton(options.linearMethod(), options.maxIterations()).solve(net, w.x(), deadline);
+        return new Newton.Result(r.x(), r.converged(), w.iterations() + r.iterations(), r.failure(), r.worstRow());
     }
 
     private Newton.Result gminStepping(Network net, Newton newton, long deadline) {

@@ -81,6 +81,9 @@ class AnalyticJacobianContractTest {
     static double[][] jacobian(Network net, double[] x) {
         int n = net.size();
         double[][] j = new double[n][n];
+        // each complementarity row takes the side that is the smaller at x, so its row is the derivative of
+        // min(a, b) there (away from ties)
+        net.beginRun();
         net.evaluate(x, new double[n], (r, c, v) -> j[r][c] += v);
         return j;
     }

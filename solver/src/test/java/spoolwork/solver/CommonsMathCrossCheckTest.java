@@ -46,6 +46,7 @@ class CommonsMathCrossCheckTest {
             }
             double[] f = new double[n];
             double[][] j = new double[n][n];
+            net.beginRun();
             net.evaluate(x, f, (r, c, v) -> j[r][c] += v * cs[c] / rs[r]);
             for (int i = 0; i < n; i++) {
                 f[i] /= rs[i];

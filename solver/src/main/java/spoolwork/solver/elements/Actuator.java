@@ -75,7 +75,12 @@ public final class Actuator extends Element {
             mode = Mode.SPLIT;
         }
         this.rateScale = rateScale;
+        this.plusCols = new int[]{plus, a, b};
+        this.minusCols = new int[]{minus, a, b};
     }
+
+    private final int[] plusCols;
+    private final int[] minusCols;
 
     private final Mode mode;
     private final double rateScale;
@@ -127,20 +132,23 @@ public final class Actuator extends Element {
             addJ(j, plus, b, -kB);
             return;
         }
-        double[] d = new double[2];
+        // a side: the rate part (still when zero); b side: the force margin (moving when zero)
         if (plus >= 0) {
-            f[plus] = Laws.fischerBurmeister(x[plus] / rateScale, (r - net0) / forceScale, d);
-            addJ(j, plus, plus, d[0] / rateScale);
-            addJ(j, plus, a, -d[1] * kA / forceScale);
-            addJ(j, plus, b, d[1] * kB / forceScale);
+            da[0] = 1 / rateScale;
+            db[1] = -kA / forceScale;
+            db[2] = kB / forceScale;
+            net.complementarity(plus, x[plus] / rateScale, (r - net0) / forceScale, plusCols, da, db, f, j);
         }
         if (minus >= 0) {
-            f[minus] = Laws.fischerBurmeister(x[minus] / rateScale, (r + net0) / forceScale, d);
-            addJ(j, minus, minus, d[0] / rateScale);
-            addJ(j, minus, a, d[1] * kA / forceScale);
-            addJ(j, minus, b, -d[1] * kB / forceScale);
+            da[0] = 1 / rateScale;
+            db[1] = kA / forceScale;
+            db[2] = -kB / forceScale;
+            net.complementarity(minus, x[minus] / rateScale, (r + net0) / forceScale, minusCols, da, db, f, j);
         }
     }
+
+    private final double[] da = new double[3];
+    private final double[] db = new double[3];
 
     @Override
     public void report(double[] x, Network net, Report rep) {

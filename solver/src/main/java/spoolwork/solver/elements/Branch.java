@@ -46,6 +46,11 @@ public class Branch extends Element {
     }
 
     @Override
+    public void initialGuess(double[] x, Network net) {
+        x[q] = law.typicalFlow();
+    }
+
+    @Override
     public void report(double[] x, Network net, Report r) {
         double flow = x[q];
         if (portA != null) {

@@ -3,45 +3,45 @@ package spoolwork.solver.elements;
 import spoolwork.solver.numeric.Jacobian;
 
 /**
- * Pressure-compensated flow control A → B: with at least its minimum drop it holds its set flow; below that
- * it is the fully open throttle, sized to pass the set flow at the minimum drop. Written as
- * q − F(Δp) = 0 with F the smooth minimum of the set flow and the open throttle's flow, made odd so that
- * reverse flow is limited alike.
+ * Pressure-compensated flow control A → B. Its throttle, fully open, passes the set flow at the minimum drop
+ * (a turbulent law Δp = r(q)); the compensator adds whatever further drop λ holds the flow at the set value.
+ * Written in flow, like a {@link Branch}: p_A − p_B − r(q) − λ⁺ + λ⁻ = 0, with two complementarity pairs
+ * λ⁺ ≥ 0 ⊥ set − q ≥ 0 and λ⁻ ≥ 0 ⊥ set + q ≥ 0, so reverse flow is limited alike. With less than the
+ * minimum drop available the compensator is idle (λ = 0) and the valve is an open throttle.
  */
 public final class FlowControl extends Element {
+    /** Scale of the compensator drop in its complementarity row, Pa. */
+    private static final double DROP_SCALE = 1e5;
+
     private final int a;
     private final int b;
     private final double set;
-    private final double kq;
-    private final double dpt;
-    private final double eps;
-    private final double offset;
+    private final DropLaw open;
     private final int q;
+    private final int up;
+    private final int down;
+    private final int[] upCols;
+    private final int[] downCols;
+    private final double[] dr = new double[1];
+    private final double[] da = new double[2];
+    private final double[] db = new double[2];
 
     public FlowControl(String owner, int a, int b, double setFlow, double minimumDrop, Network net) {
         super(owner);
         this.a = a;
         this.b = b;
         this.set = setFlow;
-        this.kq = setFlow / Math.sqrt(minimumDrop);
-        this.dpt = 1e-3 * minimumDrop;
-        this.eps = 1e-3 * setFlow;
-        this.offset = half(0, new double[2]);
-        this.q = net.add(Network.Kind.FLOW, owner, net.flowRef(), net.flowRef(), net.flowTolerance());
+        this.open = DropLaw.rated(setFlow, minimumDrop);
+        this.q = net.add(Network.Kind.FLOW, owner, net.flowRef(), net.pressureRef(), net.pressureTolerance());
+        this.up = net.add(Network.Kind.COMPLEMENTARITY, owner, net.pressureRef(), 1, 1e-9);
+        this.down = net.add(Network.Kind.COMPLEMENTARITY, owner, net.pressureRef(), 1, 1e-9);
+        this.upCols = new int[]{up, q};
+        this.downCols = new int[]{down, q};
     }
 
-    private double half(double o, double[] d) {
-        return Laws.smoothMin(o, set, eps, d);
-    }
-
-    /** Regulated flow at drop Δp (Pa), m³/s; d[0] = dF/dΔp. */
-    double law(double dp, double[] d) {
-        double[] t = new double[2];
-        double o = Laws.orificeFlow(kq, Math.abs(dp), dpt, t);
-        double dodp = t[0];
-        double v = half(o, t) - offset;
-        d[0] = t[0] * dodp;
-        return dp >= 0 ? v : -v;
+    @Override
+    public void initialGuess(double[] x, Network net) {
+        x[q] = 0.5 * set;
     }
 
     @Override
@@ -50,12 +50,18 @@ public final class FlowControl extends Element {
         addF(f, a, -flow);
         addF(f, b, flow);
         flowJ(j, a, b, q, 1);
-        double[] d = new double[1];
-        double target = law(p(x, a) - p(x, b), d);
-        f[q] = flow - target;
-        addJ(j, q, q, 1);
-        addJ(j, q, a, -d[0]);
-        addJ(j, q, b, d[0]);
+        double r = open.drop(flow, dr);
+        f[q] = p(x, a) - p(x, b) - r - x[up] + x[down];
+        addJ(j, q, a, 1);
+        addJ(j, q, b, -1);
+        addJ(j, q, q, -dr[0]);
+        addJ(j, q, up, -1);
+        addJ(j, q, down, 1);
+        da[0] = 1 / DROP_SCALE;
+        db[1] = -1 / set;
+        net.complementarity(up, x[up] / DROP_SCALE, (set - flow) / set, upCols, da, db, f, j);
+        db[1] = 1 / set;
+        net.complementarity(down, x[down] / DROP_SCALE, (set + flow) / set, downCols, da, db, f, j);
     }
 
     @Override
@@ -66,7 +72,8 @@ public final class FlowControl extends Element {
         r.flow("B", -flow);
         r.value("flow_m3s", flow);
         r.value("pressure_drop_pa", dp);
-        r.value("regulating", dp >= 0.999 * (set / kq) * (set / kq) && Math.abs(flow) > 0.99 * set ? 1 : 0);
+        r.value("compensator_drop_pa", x[up] - x[down]);
+        r.value("regulating", Math.max(x[up], x[down]) > 1e-6 * net.pressureRef() ? 1 : 0);
         r.value("power_loss_w", flow * dp);
         r.power(PowerKind.THROTTLE, flow * dp);
     }

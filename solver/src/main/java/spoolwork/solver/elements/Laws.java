@@ -8,23 +8,6 @@ public final class Laws {
     private Laws() {
     }
 
-    /**
-     * Fischer–Burmeister function φ(a,b) = a + b − √(a²+b²): zero exactly when a ≥ 0, b ≥ 0 and a·b = 0.
-     * At the kink (0,0) the derivative of the direction (1,1) is used, an element of the generalised
-     * Jacobian, which keeps semismooth Newton well defined there.
-     */
-    public static double fischerBurmeister(double a, double b, double[] d) {
-        double r = Math.hypot(a, b);
-        if (r < 1e-300) {
-            d[0] = 1 - Math.sqrt(0.5);
-            d[1] = 1 - Math.sqrt(0.5);
-            return 0;
-        }
-        d[0] = 1 - a / r;
-        d[1] = 1 - b / r;
-        return a + b - r;
-    }
-
     /** Smooth maximum (a + b + √((a−b)² + ε²))/2; within ε/2 of max(a,b). */
     public static double smoothMax(double a, double b, double eps, double[] d) {
         double s = Math.sqrt((a - b) * (a - b) + eps * eps);

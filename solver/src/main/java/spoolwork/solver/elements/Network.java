@@ -167,6 +167,142 @@ public final class Network implements NonlinearSystem {
         return rs[i];
     }
 
+    // ---- complementarity pairs -------------------------------------------------------------------------
+
+    /** Side of each complementarity row in force for the Newton step: −1 unset, 0 the a side, 1 the b side. */
+    private byte[] side;
+    private double[] pairA;
+    private double[] pairB;
+    /** Columns and derivatives of both sides of each complementarity row, at the last evaluation. */
+    private int[][] pairCols;
+    private double[][] gradA;
+    private double[][] gradB;
+
+    private void pairs() {
+        if (side == null) {
+            int n = size();
+            side = new byte[n];
+            java.util.Arrays.fill(side, (byte) -1);
+            pairA = new double[n];
+            pairB = new double[n];
+            pairCols = new int[n][];
+            gradA = new double[n][];
+            gradB = new double[n][];
+        }
+    }
+
+    /**
+     * Writes complementarity row {@code row}: a ≥ 0, b ≥ 0, a·b = 0 (both dimensionless). The residual is
+     * min(a, b), which is zero exactly at a solution. The Jacobian row is that of the side in force — a
+     * (shut: the element's own unknown is zero) or b (open: its margin is zero) — so that each Newton step
+     * solves the linearised complementarity problem once the sides are settled ({@link #switchSides}). Both
+     * sides are stamped, the unused one with zeros, so the sparsity pattern never changes.
+     *
+     * @param cols columns the two sides depend on (−1 entries are skipped)
+     * @param da   ∂a/∂x[cols[k]]
+     * @param db   ∂b/∂x[cols[k]]
+     */
+    public void complementarity(int row, double a, double b, int[] cols, double[] da, double[] db, double[] f,
+                                Jacobian j) {
+        pairs();
+        if (side[row] < 0) {
+            side[row] = (byte) (a <= b ? 0 : 1);
+        }
+        f[row] = Math.min(a, b);
+        pairA[row] = a;
+        pairB[row] = b;
+        if (j == null) {
+            return;
+        }
+        if (pairCols[row] == null || pairCols[row].length != cols.length) {
+            pairCols[row] = new int[cols.length];
+            gradA[row] = new double[cols.length];
+            gradB[row] = new double[cols.length];
+        }
+        boolean useA = side[row] == 0;
+        for (int k = 0; k < cols.length; k++) {
+            pairCols[row][k] = cols[k];
+            gradA[row][k] = da[k];
+            gradB[row][k] = db[k];
+            if (cols[k] >= 0) {
+                j.add(row, cols[k], useA ? da[k] : db[k]);
+            }
+        }
+    }
+
+    @Override
+    public void beginRun() {
+        if (side != null) {
+            java.util.Arrays.fill(side, (byte) -1);
+        }
+    }
+
+    @Override
+    public double stepResidual(int i, double[] f) {
+        if (kinds.get(i) != Kind.COMPLEMENTARITY || side == null || side[i] < 0) {
+            return f[i];
+        }
+        return side[i] == 0 ? pairA[i] : pairB[i];
+    }
+
+    @Override
+    public int switchSides(double[] dx, boolean onlyWorst) {
+        if (side == null) {
+            return 0;
+        }
+        if (previousSide == null) {
+            previousSide = new byte[side.length];
+        }
+        System.arraycopy(side, 0, previousSide, 0, side.length);
+        int switched = 0;
+        int worst = -1;
+        double worstValue = 0;
+        for (int i = 0; i < side.length; i++) {
+            if (side[i] < 0 || pairCols[i] == null) {
+                continue;
+            }
+            double a = pairA[i];
+            double b = pairB[i];
+            int[] cols = pairCols[i];
+            for (int k = 0; k < cols.length; k++) {
+                if (cols[k] >= 0) {
+                    a += gradA[i][k] * dx[cols[k]];
+                    b += gradB[i][k] * dx[cols[k]];
+                }
+            }
+            // the side in force is zero after the step; the other must not go negative
+            double free = side[i] == 0 ? b : a;
+            if (free < -SIDE_SLACK) {
+                if (onlyWorst) {
+                    if (free < worstValue) {
+                        worstValue = free;
+                        worst = i;
+                    }
+                } else {
+                    side[i] = (byte) (1 - side[i]);
+                }
+                switched++;
+            }
+        }
+        if (onlyWorst && worst >= 0) {
+            side[worst] = (byte) (1 - side[worst]);
+            return 1;
+        }
+        return switched;
+    }
+
+    @Override
+    public void undoSwitch() {
+        if (previousSide != null) {
+            System.arraycopy(previousSide, 0, side, 0, side.length);
+        }
+    }
+
+    private byte[] previousSide;
+
+    /** How far below zero the predicted free side may go before the row changes side (dimensionless). */
+    private static final double SIDE_SLACK = 1e-12;
+
     @Override
     public boolean eliminable(int i) {
         return kinds.get(i) == Kind.FLOW;

@@ -4,8 +4,8 @@ import spoolwork.solver.numeric.Jacobian;
 
 /**
  * A valve path that passes flow q ≥ 0 from node a to node b only, written as a complementarity condition
- * q ≥ 0 ⊥ m(p, q) ≥ 0 through the Fischer–Burmeister function, where the margin m (Pa) is what the
- * inlet pressure lacks for the valve to open further. Exact at the closed/open switch, no smoothing.
+ * q ≥ 0 ⊥ m(p, q) ≥ 0, where the margin m (Pa) is what the inlet pressure lacks for the valve to open
+ * further (see {@link Network#complementarity}). Exact at the closed/open switch, no smoothing.
  */
 public abstract class OneWayValve extends Element {
     /** Scale of the margin in the complementarity row, Pa. */
@@ -31,6 +31,7 @@ public abstract class OneWayValve extends Element {
         this.portB = portB;
         this.qs = flowScale;
         this.q = net.add(Network.Kind.COMPLEMENTARITY, owner, net.flowRef(), 1, 1e-9);
+        this.cols = new int[]{q, a, b, pilot};
     }
 
     /** Margin in Pa; d gets ∂m/∂p_a, ∂m/∂p_b, ∂m/∂p_x, ∂m/∂q. */
@@ -45,16 +46,20 @@ public abstract class OneWayValve extends Element {
         addF(f, a, -flow);
         addF(f, b, flow);
         flowJ(j, a, b, q, 1);
-        double[] dm = new double[4];
         double m = margin(p(xs, a), p(xs, b), p(xs, x), flow, dm);
-        double[] d = new double[2];
-        f[q] = Laws.fischerBurmeister(flow / qs, m / MARGIN_SCALE, d);
-        double dbm = d[1] / MARGIN_SCALE;
-        addJ(j, q, q, d[0] / qs + dbm * dm[3]);
-        addJ(j, q, a, dbm * dm[0]);
-        addJ(j, q, b, dbm * dm[1]);
-        addJ(j, q, x, dbm * dm[2]);
+        // a side: the flow (shut when zero); b side: the margin (open when zero); columns q, a, b, x
+        da[0] = 1 / qs;
+        db[0] = dm[3] / MARGIN_SCALE;
+        db[1] = dm[0] / MARGIN_SCALE;
+        db[2] = dm[1] / MARGIN_SCALE;
+        db[3] = dm[2] / MARGIN_SCALE;
+        net.complementarity(q, flow / qs, m / MARGIN_SCALE, cols, da, db, f, j);
     }
+
+    private final int[] cols;
+    private final double[] dm = new double[4];
+    private final double[] da = new double[4];
+    private final double[] db = new double[4];
 
     @Override
     public void report(double[] xs, Network net, Report r) {

@@ -1,10 +1,13 @@
 package spoolwork.solver.numeric;
 
 /**
- * Damped Newton's method on a scaled system: pressure steps limited to max(20 bar, half the pressure),
- * then Armijo backtracking on ½‖W·F‖² with W the inverse row scales. Converged means every row within its
- * tolerance and a small Newton step, or every row within tolerance and no further descent possible.
- * Never returns a non-finite iterate: a step that gives NaN is backtracked like any other bad step.
+ * Semismooth Newton's method on a scaled system. Each step solves the linearised complementarity problem
+ * (the sides of the complementarity rows are settled by an active-set loop inside the step); absurd
+ * pressure changes are capped; then a non-monotone Armijo test on ½‖W·F‖² (W the inverse row scales) with a
+ * watchdog: a full step that raises the merit is taken up to {@link #MAX_RELAXED} times in a row, and if no
+ * better point comes of it Newton goes back to the best point and backtracks from there. Converged means
+ * every row within its tolerance and a small Newton step, or every row within tolerance and no further
+ * descent possible. Never returns a non-finite iterate: a step that gives NaN is backtracked like any other.
  */
 public final class Newton {
     /** Outcome of one Newton run. */
@@ -37,22 +40,24 @@ public final class Newton {
             colScale[i] = s.unknownScale(i);
         }
         LinearStep lin = new LinearStep(n, method, s);
+        s.beginRun();
         s.evaluate(x, f, lin);
         if (!finite(f)) {
             return new Result(x0.clone(), false, 0, "residual not finite at the start", worst(s, f));
         }
         double merit = merit(f, rowScale);
         double[] history = new double[4];
-        int watchdog = 8;
+        // watchdog: a full step may raise the merit for a few iterations (a valve opening, a load breaking
+        // away moves every pressure at once); if no new best comes of it, go back to the best point and search
+        double[] best = x.clone();
+        double bestMerit = merit;
+        int relaxed = 0;
+        boolean searchOnly = false;
         for (int it = 0; it < maxIterations; it++) {
             if (System.nanoTime() > deadlineNanos) {
                 return new Result(x, false, it, "time limit reached", worst(s, f));
             }
-            double[] rhs = new double[n];
-            for (int i = 0; i < n; i++) {
-                rhs[i] = -f[i] / rowScale[i];
-            }
-            double[] y = lin.solve(rhs, rowScale, colScale);
+            double[] y = activeSetStep(s, x, f, lin, rowScale, colScale);
             if (y == null) {
                 if (within(s, f)) {
                     return new Result(x, true, it, null, -1);
@@ -65,8 +70,9 @@ public final class Newton {
                 stepNorm = Math.max(stepNorm, Math.abs(y[i]));
                 double dx = y[i] * colScale[i];
                 if (s.isPressure(i)) {
-                    // limit each pressure's change on its own, as circuit simulators limit junction voltages
-                    double limit = Math.max(Math.max(PRESSURE_STEP_FLOOR, 0.5 * colScale[i]), 0.5 * Math.abs(x[i]));
+                    // cap absurd pressure changes on their own (a node that only a leak holds); ordinary steps
+                    // are left whole, so that they still solve the linearised complementarity problem
+                    double limit = Math.max(Math.max(PRESSURE_STEP_FLOOR, 10 * colScale[i]), 0.5 * Math.abs(x[i]));
                     dx = Math.max(-limit, Math.min(limit, dx));
                 }
                 dir[i] = dx;
@@ -95,31 +101,38 @@ public final class Newton {
                         merit = mt;
                         break;
                     }
+                    if (ls == 0 && !searchOnly && relaxed < MAX_RELAXED) {
+                        relaxed++;
+                        accepted = true;
+                        merit = mt;
+                        break;
+                    }
+                }
+                if (ls == 0 && relaxed > 0 && !searchOnly) {
+                    // the relaxed steps led nowhere: back to the best point, and search from there
+                    break;
                 }
                 alpha *= 0.5;
             }
+            if (!accepted && relaxed > 0 && !searchOnly) {
+                System.arraycopy(best, 0, x, 0, n);
+                lin.clear();
+                s.evaluate(x, f, lin);
+                merit = bestMerit;
+                java.util.Arrays.fill(history, 0);
+                relaxed = 0;
+                searchOnly = true;
+                continue;
+            }
             if (!accepted && small) {
                 return new Result(x, true, it, null, -1);
-            }
-            if (!accepted && watchdog > 0) {
-                // A flat merit (a saturated path, a closed valve the pressure must climb to) stalls the line
-                // search; take the limited full step a few times, as circuit simulators do without one.
-                watchdog--;
-                for (int i = 0; i < n; i++) {
-                    xt[i] = x[i] + dir[i];
-                }
-                s.evaluate(xt, ft, lin.spare());
-                if (finite(ft)) {
-                    accepted = true;
-                    alpha = 1;
-                    merit = merit(ft, rowScale);
-                }
             }
             if (!accepted) {
                 return new Result(x, false, it + 1, "no descent along the Newton step", worst(s, f));
             }
             if (TRACE) {
-                System.err.printf("it %d alpha %.3g step %.3g merit %.3g%n", it, alpha, stepNorm, merit);
+                System.err.printf("it %d alpha %.3g step %.3g merit %.3g relaxed %d%n", it, alpha, stepNorm, merit,
+                        relaxed);
             }
             // the accepted trial already holds F and the Jacobian at the new iterate
             System.arraycopy(xt, 0, x, 0, n);
@@ -127,8 +140,14 @@ public final class Newton {
             f = ft;
             ft = swap;
             lin.acceptSpare();
+            if (merit < (1 - 1e-4) * bestMerit) {
+                System.arraycopy(x, 0, best, 0, n);
+                bestMerit = merit;
+                relaxed = 0;
+                searchOnly = false;
+            }
             if (within(s, f) && alpha * stepNorm <= STEP_TOLERANCE) {
-                double[] last = lin.solve(negScaled(f, rowScale), rowScale, colScale);
+                double[] last = lin.solve(negScaled(s, f, rowScale), rowScale, colScale);
                 return new Result(last == null ? x : polish(s, x, f, last, colScale, rowScale), true, it + 2, null, -1);
             }
         }
@@ -138,12 +157,63 @@ public final class Newton {
         return new Result(x, false, maxIterations, "iteration limit reached", worst(s, f));
     }
 
-    private static double[] negScaled(double[] f, double[] rowScale) {
+    private static double[] negScaled(NonlinearSystem s, double[] f, double[] rowScale) {
         double[] r = new double[f.length];
         for (int i = 0; i < f.length; i++) {
-            r[i] = -f[i] / rowScale[i];
+            r[i] = -s.stepResidual(i, f) / rowScale[i];
         }
         return r;
+    }
+
+    /** Most rounds of side changes within one Newton step. */
+    static final int MAX_SIDE_ROUNDS = 8;
+    /** Most full steps in a row that may raise the merit before going back to the best point. */
+    static final int MAX_RELAXED = 6;
+
+    /**
+     * The Newton step of the linearised complementarity problem at x: solve with the sides in force, let the
+     * system move every row whose other side the step would make negative, evaluate the Jacobian again and
+     * repeat until no side changes (or {@link #MAX_SIDE_ROUNDS}). A closed valve thus opens within the step
+     * that raises its inlet past the setting, instead of the step overshooting and being cut back.
+     * Returns the scaled step, or null when the matrix is singular.
+     */
+    private static double[] activeSetStep(NonlinearSystem s, double[] x, double[] f, LinearStep lin,
+                                          double[] rowScale, double[] colScale) {
+        int n = x.length;
+        double[] dx = new double[n];
+        double[] last = null;
+        boolean onlyWorst = false;
+        for (int round = 0; ; round++) {
+            double[] y = lin.solve(negScaled(s, f, rowScale), rowScale, colScale);
+            if (y == null) {
+                if (last == null) {
+                    return null;
+                }
+                // the sides just chosen make the matrix singular (say a relief opening while a load breaks
+                // away on the same node): go back, and change only the worst row from there
+                s.undoSwitch();
+                lin.clear();
+                s.evaluate(x, f, lin);
+                if (onlyWorst) {
+                    return last;
+                }
+                onlyWorst = true;
+                y = last;
+            } else {
+                last = y;
+            }
+            if (round == MAX_SIDE_ROUNDS) {
+                return y;
+            }
+            for (int i = 0; i < n; i++) {
+                dx[i] = y[i] * colScale[i];
+            }
+            if (s.switchSides(dx, onlyWorst) == 0) {
+                return y;
+            }
+            lin.clear();
+            s.evaluate(x, f, lin);
+        }
     }
 
     /**

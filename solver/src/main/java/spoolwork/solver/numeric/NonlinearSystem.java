@@ -30,4 +30,29 @@ public interface NonlinearSystem {
     default boolean eliminable(int i) {
         return false;
     }
+
+    /** Called at the start of every Newton run: complementarity rows choose their sides afresh. */
+    default void beginRun() {
+    }
+
+    /**
+     * The value row i takes in the Newton step's right-hand side: F[i] itself, except for a
+     * complementarity row, where it is the side in force (F[i] is min of both sides there).
+     */
+    default double stepResidual(int i, double[] f) {
+        return f[i];
+    }
+
+    /**
+     * Given a Newton step dx from the last evaluated point, changes the side of every complementarity row
+     * whose other side the step would drive negative (the primal–dual active-set rule), or of only the
+     * worst such row, and returns how many rows wanted to change; the Jacobian must then be evaluated again.
+     */
+    default int switchSides(double[] dx, boolean onlyWorst) {
+        return 0;
+    }
+
+    /** Puts back the sides as they were before the last {@link #switchSides}. */
+    default void undoSwitch() {
+    }
 }
