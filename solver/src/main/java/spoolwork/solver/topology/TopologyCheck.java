@@ -1,16 +1,16 @@
 package spoolwork.solver.topology;
 
-import java.util.ArrayDeque;
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.HashMap;
 import java.util.HashSet;
 import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
+import java.util.TreeMap;
 
 import org.jgrapht.Graph;
-import org.jgrapht.Graphs;
 
 import spoolwork.model.ActuatorState;
 import spoolwork.model.Circuit;
@@ -39,12 +39,65 @@ public final class TopologyCheck {
         this.circuit = circuit;
         this.state = state;
         this.netlist = netlist;
+        Map<String, ComponentType> typeOf = new HashMap<>();
         for (Component c : circuit.components()) {
             typeOf.put(c.id(), c.type());
         }
+        // a compact copy of the graph, numbered in its vertex order, so that each traversal below is a
+        // plain walk over int arrays
+        Graph<NetNode, NetEdge> g = netlist.graph();
+        int n = g.vertexSet().size();
+        nodes = g.vertexSet().toArray(new NetNode[0]);
+        nodeType = new ComponentType[n];
+        for (int i = 0; i < n; i++) {
+            index.put(nodes[i], i);
+            if (nodes[i] instanceof NetNode.Port p) {
+                nodeType[i] = typeOf.get(p.componentId());
+            }
+        }
+        int m = g.edgeSet().size();
+        int[] from = new int[m];
+        int[] to = new int[m];
+        byte[] kind = new byte[m];
+        int[] degree = new int[n + 1];
+        int k = 0;
+        for (NetEdge e : g.edgeSet()) {
+            from[k] = index.get(g.getEdgeSource(e));
+            to[k] = index.get(g.getEdgeTarget(e));
+            if (e instanceof NetEdge.InternalEdge ie) {
+                ComponentType t = typeOf.get(ie.componentId());
+                kind[k] = t.isPump() ? PUMP_PATH : t == ComponentType.HYDRAULIC_MOTOR ? MOTOR_PATH : OTHER;
+            }
+            degree[from[k] + 1]++;
+            degree[to[k] + 1]++;
+            k++;
+        }
+        for (int i = 0; i < n; i++) {
+            degree[i + 1] += degree[i];
+        }
+        adjStart = degree;
+        adjNode = new int[2 * m];
+        adjKind = new byte[2 * m];
+        int[] fill = Arrays.copyOf(degree, n);
+        for (int e = 0; e < m; e++) {
+            adjNode[fill[from[e]]] = to[e];
+            adjKind[fill[from[e]]++] = kind[e];
+            adjNode[fill[to[e]]] = from[e];
+            adjKind[fill[to[e]]++] = kind[e];
+        }
     }
 
-    private final Map<String, ComponentType> typeOf = new HashMap<>();
+    private static final byte OTHER = 0;
+    private static final byte PUMP_PATH = 1;
+    private static final byte MOTOR_PATH = 2;
+
+    private final Map<NetNode, Integer> index = new HashMap<>();
+    private final NetNode[] nodes;
+    /** Type of the component each node is a port of; null for a junction. */
+    private final ComponentType[] nodeType;
+    private final int[] adjStart;
+    private final int[] adjNode;
+    private final byte[] adjKind;
 
     public List<Diagnostic> run() {
         List<Diagnostic> out = new ArrayList<>();
@@ -87,30 +140,37 @@ public final class TopologyCheck {
     }
 
     private void floating(List<Diagnostic> out) {
-        Set<NetNode> without = netlist.nodesWithoutReservoir();
-        if (without.isEmpty()) {
-            return;
+        int[] label = labels(false, false);
+        boolean[] reached = new boolean[nodes.length];
+        for (NetNode.Port r : netlist.reservoirPorts()) {
+            reached[label[index.get(r)]] = true;
         }
         Set<NetNode> lone = new HashSet<>(netlist.unconnectedPorts());
-        for (Set<NetNode> sub : netlist.subNetworks()) {
-            if (!without.containsAll(sub) || lone.containsAll(sub)) {
+        Map<Integer, List<NetNode>> subs = new TreeMap<>();
+        for (int i = 0; i < nodes.length; i++) {
+            if (!reached[label[i]]) {
+                subs.computeIfAbsent(label[i], x -> new ArrayList<>()).add(nodes[i]);
+            }
+        }
+        for (List<NetNode> sub : subs.values()) {
+            if (lone.containsAll(sub)) {
                 continue;
             }
             Set<String> tags = new LinkedHashSet<>();
-            List<String> nodes = new ArrayList<>();
+            List<String> names = new ArrayList<>();
             for (NetNode n : sub) {
-                nodes.add(name(n));
+                names.add(name(n));
                 if (n instanceof NetNode.Port p) {
                     tags.add(tag(p.componentId()));
                 }
             }
             boolean onlyPilots = sub.stream().allMatch(n -> n instanceof NetNode.Junction
                     || isPilot((NetNode.Port) n));
-            if (onlyPilots && !sub.isEmpty()) {
+            if (onlyPilots) {
                 continue;
             }
             List<String> involved = new ArrayList<>(tags);
-            out.add(new Diagnostic(Severity.WARNING, "no path to the reservoir from " + String.join(", ", nodes)
+            out.add(new Diagnostic(Severity.WARNING, "no path to the reservoir from " + String.join(", ", names)
                     + " in state " + state.name() + ": the pressure there is set by leakage and trapped oil only",
                     involved));
         }
@@ -126,31 +186,36 @@ public final class TopologyCheck {
      * Labels the nodes by connected part of the graph, leaving out the internal paths of pumps (a pump does
      * not pass its outlet pressure back to its inlet) and, when asked, of motors.
      */
-    private Map<NetNode, Integer> parts(boolean cutMotors) {
-        Graph<NetNode, NetEdge> g = netlist.graph();
-        Map<NetNode, Integer> label = new HashMap<>();
+    private int[] parts(boolean cutMotors) {
+        return labels(true, cutMotors);
+    }
+
+    /** Connected-part label of every node, optionally not walking through pumps and motors. */
+    private int[] labels(boolean cutPumps, boolean cutMotors) {
+        int n = nodes.length;
+        int[] label = new int[n];
+        Arrays.fill(label, -1);
+        int[] queue = new int[n];
         int next = 0;
-        for (NetNode start : g.vertexSet()) {
-            if (label.containsKey(start)) {
+        for (int start = 0; start < n; start++) {
+            if (label[start] >= 0) {
                 continue;
             }
             int id = next++;
-            ArrayDeque<NetNode> queue = new ArrayDeque<>();
-            label.put(start, id);
-            queue.add(start);
-            while (!queue.isEmpty()) {
-                NetNode n = queue.poll();
-                for (NetEdge e : g.edgesOf(n)) {
-                    if (e instanceof NetEdge.InternalEdge ie) {
-                        ComponentType t = typeOf.get(ie.componentId());
-                        if (t.isPump() || (cutMotors && t == ComponentType.HYDRAULIC_MOTOR)) {
-                            continue;
-                        }
+            int head = 0;
+            int tail = 0;
+            label[start] = id;
+            queue[tail++] = start;
+            while (head < tail) {
+                int v = queue[head++];
+                for (int k = adjStart[v]; k < adjStart[v + 1]; k++) {
+                    if ((cutPumps && adjKind[k] == PUMP_PATH) || (cutMotors && adjKind[k] == MOTOR_PATH)) {
+                        continue;
                     }
-                    NetNode m = Graphs.getOppositeVertex(g, e, n);
-                    if (!label.containsKey(m)) {
-                        label.put(m, id);
-                        queue.add(m);
+                    int w = adjNode[k];
+                    if (label[w] < 0) {
+                        label[w] = id;
+                        queue[tail++] = w;
                     }
                 }
             }
@@ -159,33 +224,33 @@ public final class TopologyCheck {
     }
 
     /** Labels of the parts that hold a port of one of the given types (and port name, when not null). */
-    private Set<Integer> partsWith(Map<NetNode, Integer> label, Set<ComponentType> types, String port) {
+    private Set<Integer> partsWith(int[] label, Set<ComponentType> types, String port) {
         Set<Integer> out = new HashSet<>();
-        for (Map.Entry<NetNode, Integer> e : label.entrySet()) {
-            if (e.getKey() instanceof NetNode.Port p && types.contains(typeOf.get(p.componentId()))
+        for (int i = 0; i < nodes.length; i++) {
+            if (nodes[i] instanceof NetNode.Port p && types.contains(nodeType[i])
                     && (port == null || p.port().equals(port))) {
-                out.add(e.getValue());
+                out.add(label[i]);
             }
         }
         return out;
     }
 
     private void pumps(List<Diagnostic> out) {
-        Map<NetNode, Integer> label = parts(false);
+        int[] label = parts(false);
         Set<Integer> relieved = partsWith(label, Set.of(ComponentType.RELIEF_VALVE), "P");
         Set<Integer> fed = partsWith(label, Set.of(ComponentType.RESERVOIR), null);
         for (Component c : circuit.components()) {
             if (!c.type().isPump()) {
                 continue;
             }
-            int outlet = label.get(new NetNode.Port(c.id(), "P"));
+            int outlet = label[index.get(new NetNode.Port(c.id(), "P"))];
             if (c.type() == ComponentType.FIXED_PUMP && !relieved.contains(outlet)) {
                 out.add(new Diagnostic(Severity.ERROR, "the outlet of fixed pump " + c.tag()
                         + " reaches no relief valve in state " + state.name()
                         + ": its pressure would rise until something breaks. Add a relief valve at the pump.",
                         List.of(c.tag())));
             }
-            if (!fed.contains(label.get(new NetNode.Port(c.id(), "S")))) {
+            if (!fed.contains(label[index.get(new NetNode.Port(c.id(), "S"))])) {
                 out.add(new Diagnostic(Severity.ERROR, "the inlet S of pump " + c.tag()
                         + " is not fed from a reservoir: it would run dry", List.of(c.tag())));
             }
@@ -193,7 +258,7 @@ public final class TopologyCheck {
     }
 
     private void locked(List<Diagnostic> out) {
-        Map<NetNode, Integer> label = parts(true);
+        int[] label = parts(true);
         Set<Integer> escape = partsWith(label, Set.of(ComponentType.RESERVOIR, ComponentType.FIXED_PUMP,
                 ComponentType.COMPENSATED_PUMP, ComponentType.ACCUMULATOR), null);
         for (Component c : circuit.components()) {
@@ -206,7 +271,7 @@ public final class TopologyCheck {
             }
             List<String> trapped = new ArrayList<>();
             for (PortSpec ps : c.type().ports()) {
-                if (!ps.mechanical() && !escape.contains(label.get(new NetNode.Port(c.id(), ps.name())))) {
+                if (!ps.mechanical() && !escape.contains(label[index.get(new NetNode.Port(c.id(), ps.name()))])) {
                     trapped.add(ps.name());
                 }
             }
