@@ -356,7 +356,8 @@ final class LinearStep implements Jacobian {
                     }
                 }
             }
-            int[] perm = band ? Ordering.reverseCuthillMcKee(m, pr, pc, total) : Ordering.minimumDegree(m, pr, pc, total);
+            int[] perm = band ? Ordering.reverseCuthillMcKee(m, pr, pc, total)
+                    : Ordering.minimumDegree(m, pr, pc, total);
             int[] inverse = new int[m];
             for (int i = 0; i < m; i++) {
                 inverse[perm[i]] = i;

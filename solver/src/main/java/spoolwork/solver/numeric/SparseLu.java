@@ -12,9 +12,10 @@ import java.util.Arrays;
  * found by a depth-first search, and the pivot is the diagonal entry (row Q[k]) when it is at least
  * {@link #PIVOT_TOLERANCE} times the largest candidate, else the largest candidate. Later calls with new
  * values keep the row order and the patterns of L and U and only redo the arithmetic, without searching
- * and without allocating. A refactorisation falls back to a fresh pivoting factorisation when a kept pivot
- * no longer passes the same threshold test against the candidates of its column, so the bound on the
- * entries of L (|l| ≤ 1/{@link #PIVOT_TOLERANCE}) holds in both cases.
+ * and without allocating. A refactorisation falls back to pivoting when a kept pivot no longer passes the
+ * same threshold test against the candidates of its column, so the bound on the entries of L
+ * (|l| ≤ 1/{@link #PIVOT_TOLERANCE}) holds in both cases; the columns before the failed one have passed
+ * the test with the new values and are kept, the search starts again at the failed column.
  *
  * <p>A matrix is reported singular ({@code false}) when a column has no usable pivot: every candidate is
  * zero, or the largest is below {@link #SINGULAR_TOLERANCE} times the largest magnitude met in that
@@ -67,7 +68,8 @@ final class SparseLu {
         for (int j = 0; j < n; j++) {
             for (int p = ap[j]; p < ap[j + 1]; p++) {
                 if (ai[p] < 0 || ai[p] >= n) {
-                    throw new IllegalArgumentException("sparse LU: row " + ai[p] + " in column " + j + " outside 0.." + (n - 1));
+                    throw new IllegalArgumentException(
+                            "sparse LU: row " + ai[p] + " in column " + j + " outside 0.." + (n - 1));
                 }
             }
         }
@@ -78,7 +80,8 @@ final class SparseLu {
             }
         } else {
             if (order.length != n) {
-                throw new IllegalArgumentException("sparse LU: column order has " + order.length + " entries, not " + n);
+                throw new IllegalArgumentException(
+                        "sparse LU: column order has " + order.length + " entries, not " + n);
             }
             q = order.clone();
             boolean[] seen = new boolean[n];
@@ -114,7 +117,10 @@ final class SparseLu {
         return factored ? lp[n] + up[n] : 0;
     }
 
-    /** How many factorisations searched for pivots (the rest reused the order). */
+    /**
+     * How many factorisations searched for pivots, from the first column or from the column where a
+     * refactorisation failed; the others reused the stored order throughout.
+     */
     int pivotingFactorisations() {
         return fresh;
     }
@@ -132,21 +138,38 @@ final class SparseLu {
                 return false;
             }
         }
-        if (factored && refactor(values)) {
-            return true;
+        int from = 0;
+        if (factored) {
+            from = refactor(values);
+            if (from < 0) {
+                return true;
+            }
         }
-        factored = pivotingFactor(values);
+        factored = pivotingFactor(values, from);
         return factored;
     }
 
-    /** Left-looking LU with threshold partial pivoting; finds the patterns of L and U. */
-    private boolean pivotingFactor(double[] values) {
+    /**
+     * Left-looking LU with threshold partial pivoting from column {@code from} on; finds the patterns of L
+     * and U. Columns before {@code from} must hold a valid factorisation of the same values.
+     */
+    private boolean pivotingFactor(double[] values, int from) {
         fresh++;
-        Arrays.fill(pinv, -1);
         Arrays.fill(x, 0);
-        int lnz = 0;
-        int unz = 0;
-        for (int k = 0; k < n; k++) {
+        if (from == 0) {
+            Arrays.fill(pinv, -1);
+        } else {
+            // keep columns 0..from−1 and their pivot rows; L goes back to rows of A while the search runs
+            for (int p = 0; p < lp[from]; p++) {
+                li[p] = prow[li[p]];
+            }
+            for (int k = from; k < n; k++) {
+                pinv[prow[k]] = -1;
+            }
+        }
+        int lnz = lp[from];
+        int unz = up[from];
+        for (int k = from; k < n; k++) {
             lp[k] = lnz;
             up[k] = unz;
             if (lnz + n > li.length) {
@@ -273,8 +296,12 @@ final class SparseLu {
         return top;
     }
 
-    /** Numeric factorisation along the stored pivot order and patterns; false if a pivot has gone bad. */
-    private boolean refactor(double[] values) {
+    /**
+     * Numeric factorisation along the stored pivot order and patterns.
+     *
+     * @return −1 when done, else the first column whose pivot failed the test
+     */
+    private int refactor(double[] values) {
         for (int k = 0; k < n; k++) {
             int col = q[k];
             for (int p = up[k]; p < up[k + 1]; p++) {
@@ -304,15 +331,16 @@ final class SparseLu {
                 best = Math.max(best, Math.abs(x[li[t]]));
             }
             big = Math.max(big, best);
-            if (!(Math.abs(pivot) >= PIVOT_TOLERANCE * best) || !(best > SINGULAR_TOLERANCE * big) || !Double.isFinite(big)) {
-                return false;
+            if (!(Math.abs(pivot) >= PIVOT_TOLERANCE * best) || !(best > SINGULAR_TOLERANCE * big)
+                    || !Double.isFinite(big)) {
+                return k;
             }
             ux[diag] = pivot;
             for (int t = lp[k] + 1; t < lp[k + 1]; t++) {
                 lx[t] = x[li[t]] / pivot;
             }
         }
-        return true;
+        return -1;
     }
 
     /**

@@ -19,12 +19,12 @@ import org.junit.jupiter.api.Test;
 /**
  * Checks {@link SparseLu}, a left-looking LU with threshold partial pivoting after Gilbert & Peierls,
  * "Sparse partial pivoting in time proportional to arithmetic operations" (SIAM J. Sci. Stat. Comput. 9,
- * 1988), in the form given by Davis, "Direct Methods for Sparse Linear Systems" (SIAM, 2006), §6.3
+ * 1988), in the form given by Davis, "Direct Methods for Sparse Linear Systems" (SIAM, 2006), chapter 6
  * (cs_lu), with a refactorisation that keeps the pivot order and patterns.
  *
- * <p>Accuracy is judged by the normwise backward error ‖Ax − b‖ / (‖A‖‖x‖ + ‖b‖) (infinity norms), which
- * a backward stable solver keeps near the unit round-off (Higham, "Accuracy and Stability of Numerical
- * Algorithms", 2nd ed., 2002, §7.1, Rigal–Gaches theorem); the bound 1e-12 leaves room for the growth that
+ * <p>Accuracy is judged by the normwise backward error ‖Ax − b‖ / (‖A‖‖x‖ + ‖b‖) (infinity norms),
+ * which a backward stable solver keeps near the unit round-off (Higham, "Accuracy and Stability of Numerical
+ * Algorithms", 2nd ed., 2002, ch. 7, Rigal–Gaches theorem); the bound 1e-12 leaves room for the growth that
  * threshold pivoting allows.
  */
 class SparseLuTest {
@@ -325,6 +325,53 @@ class SparseLuTest {
     }
 
     @Test
+    void fallbackInALaterColumnKeepsTheColumnsBefore() {
+        // a circuit-like block, then a 2×2 block [[d, 1], [1, 1]] whose columns also have entries in rows of
+        // the first block; the first block is numbered by minimum degree, the 2×2 block last, so that its
+        // pivot is d itself
+        Sparse first = circuitLike(60, 6, false, 21);
+        int m = first.n;
+        Sparse a = new Sparse(m + 2);
+        for (Map.Entry<Long, Double> e : first.entries.entrySet()) {
+            a.add((int) (e.getKey() % m), (int) (e.getKey() / m), e.getValue());
+        }
+        a.add(m, m, 1);
+        a.add(m + 1, m, 1);
+        a.add(m, m + 1, 1);
+        a.add(m + 1, m + 1, 1.5);
+        for (int j = 3; j < m; j += 7) {
+            a.add(j, m, 0.25 * j);
+            a.add(j + 1, m + 1, -0.5);
+        }
+        int[] q = Arrays.copyOf(order(first, 1), a.n);
+        q[m] = m;
+        q[m + 1] = m + 1;
+        SparseLu lu = new SparseLu(a.n, a.colPtr(), a.rowIdx(), q);
+        assertTrue(lu.factor(a.values()));
+        SplittableRandom rnd = new SplittableRandom(4);
+        for (int round = 0; round < 3; round++) {
+            Sparse changed = a.withValues(() -> 0);
+            for (Map.Entry<Long, Double> e : a.entries.entrySet()) {
+                changed.entries.put(e.getKey(), e.getValue() * (1 + rnd.nextDouble(-0.1, 0.1)));
+            }
+            if (round == 1) {
+                changed.set(m, m, 0);
+            }
+            assertTrue(lu.factor(changed.values()));
+            assertEquals(round == 0 ? 1 : 2, lu.pivotingFactorisations(), "round " + round);
+            double[] b = randomVector(a.n, round);
+            double[] x = new double[a.n];
+            lu.solve(b, x);
+            assertTrue(backwardError(changed, x, b) <= BACKWARD_ERROR, "round " + round);
+            double[] reference = denseSolve(changed, b);
+            double scale = Arrays.stream(reference).map(Math::abs).max().orElse(1);
+            for (int i = 0; i < a.n; i++) {
+                assertEquals(reference[i], x[i], 1e-9 * scale, "round " + round + " unknown " + i);
+            }
+        }
+    }
+
+    @Test
     void refactorFallsBackWhenAKeptPivotBecomesTiny() {
         // pivot 1e-5 against a candidate 1 in its column fails the 1e-3 threshold; a fresh search swaps rows
         int[] colPtr = {0, 2, 4};
@@ -398,7 +445,7 @@ class SparseLuTest {
     void minimumDegreeOrdersAnArrowMatrixWithoutFill() {
         // An arrow matrix with the dense row and column first fills completely in the natural order and not at
         // all when the dense unknown comes last; minimum degree finds that order (George & Liu, "Computer
-        // Solution of Large Sparse Positive Definite Systems", 1981, ch. 5).
+        // Solution of Large Sparse Positive Definite Systems", 1981).
         int n = 60;
         Sparse a = new Sparse(n);
         for (int i = 0; i < n; i++) {
@@ -412,7 +459,8 @@ class SparseLuTest {
         assertTrue(q[n - 1] == 0 || q[n - 2] == 0, "the dense unknown is numbered among the last two");
         SparseLu md = new SparseLu(n, a.colPtr(), a.rowIdx(), q);
         assertTrue(md.factor(a.values()));
-        assertEquals(a.entries.size() + n, md.factorEntries(), "no fill: L and U hold A's entries plus L's unit diagonal");
+        assertEquals(a.entries.size() + n, md.factorEntries(),
+                "no fill: L and U hold A's entries plus L's unit diagonal");
         SparseLu natural = new SparseLu(n, a.colPtr(), a.rowIdx(), null);
         assertTrue(natural.factor(a.values()));
         assertEquals(n * n + n, natural.factorEntries(), "natural order fills L and U completely");
