@@ -2,7 +2,10 @@ package spoolwork.solver.numeric;
 
 /** How the Newton step's linear system is solved. */
 public enum LinearMethod {
-    /** EJML sparse LU on a reverse Cuthill–McKee numbering of the unknowns. */
+    /**
+     * Sparse: branch flows condensed out, then the project's sparse LU on a minimum degree numbering
+     * (EJML's sparse LU when the system cannot be condensed).
+     */
     SPARSE,
     /** EJML dense LU; fine for small systems, the reference for the benchmark. */
     DENSE,

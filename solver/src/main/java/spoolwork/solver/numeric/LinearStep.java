@@ -15,16 +15,17 @@ import org.ejml.dense.row.factory.LinearSolverFactory_DDRM;
 
 /**
  * Collects Jacobian entries of one Newton iteration and solves J·dx = b for the step, in scaled units.
- * The sparse path numbers the unknowns once by reverse Cuthill–McKee and then always factors with
- * {@link FillReducing#NONE}: EJML's own orderings are not safe to use with its LU.
+ * The sparse path condenses the system, numbers the kept unknowns once per sparsity pattern (minimum degree
+ * by default) and factors with {@link SparseLu}, which reuses its pivot order and patterns from one
+ * iteration to the next. The fallback for systems that cannot be condensed uses EJML's sparse LU with
+ * {@link FillReducing#NONE} after reverse Cuthill–McKee: EJML's own orderings are not safe with its LU.
  */
 final class LinearStep implements Jacobian {
     private final int n;
     private final boolean dense;
-    private int[] rows = new int[256];
-    private int[] cols = new int[256];
-    private double[] vals = new double[256];
-    private int count;
+    private Triplets current = new Triplets();
+    private Triplets trial = new Triplets();
+    private boolean bandOrdering;
 
     private final boolean[] eliminable;
 
@@ -46,67 +47,69 @@ final class LinearStep implements Jacobian {
 
 
     void clear() {
-        count = 0;
+        current.count = 0;
     }
 
-    private int[] spareRows = new int[256];
-    private int[] spareCols = new int[256];
-    private double[] spareVals = new double[256];
-    private int spareCount;
+    /** Jacobian entries in the order they arrived; entries for the same place are summed later. */
+    private static final class Triplets implements Jacobian {
+        int[] rows = new int[256];
+        int[] cols = new int[256];
+        double[] vals = new double[256];
+        int count;
+
+        @Override
+        public void add(int row, int col, double value) {
+            if (row < 0 || col < 0) {
+                return;
+            }
+            if (count == rows.length) {
+                rows = Arrays.copyOf(rows, count * 2);
+                cols = Arrays.copyOf(cols, count * 2);
+                vals = Arrays.copyOf(vals, count * 2);
+            }
+            rows[count] = row;
+            cols[count] = col;
+            vals[count] = value;
+            count++;
+        }
+    }
 
     /**
      * A second, empty set of entries for a trial point of the line search, so that the accepted trial's
      * Jacobian is kept (by {@link #acceptSpare()}) instead of evaluating the system again there.
      */
     Jacobian spare() {
-        spareCount = 0;
-        return spareSink;
+        trial.count = 0;
+        return trial;
     }
-
-    private final Jacobian spareSink = (row, col, value) -> {
-            if (row < 0 || col < 0) {
-                return;
-            }
-            if (spareCount == spareRows.length) {
-                spareRows = Arrays.copyOf(spareRows, spareCount * 2);
-                spareCols = Arrays.copyOf(spareCols, spareCount * 2);
-                spareVals = Arrays.copyOf(spareVals, spareCount * 2);
-            }
-            spareRows[spareCount] = row;
-            spareCols[spareCount] = col;
-            spareVals[spareCount] = value;
-            spareCount++;
-    };
 
     /** Makes the entries last written through {@link #spare()} the current ones. */
     void acceptSpare() {
-        int[] r = rows;
-        int[] c = cols;
-        double[] v = vals;
-        rows = spareRows;
-        cols = spareCols;
-        vals = spareVals;
-        count = spareCount;
-        spareRows = r;
-        spareCols = c;
-        spareVals = v;
-        spareCount = 0;
+        Triplets t = current;
+        current = trial;
+        trial = t;
+        trial.count = 0;
     }
 
     @Override
     public void add(int row, int col, double value) {
-        if (row < 0 || col < 0) {
-            return;
+        current.add(row, col, value);
+    }
+
+    /**
+     * Numbers the condensed matrix by reverse Cuthill–McKee instead of minimum degree from the next new
+     * sparsity pattern on (for comparing the fill of the two).
+     */
+    void useBandOrdering(boolean band) {
+        if (band != bandOrdering) {
+            bandOrdering = band;
+            plan = null;
         }
-        if (count == rows.length) {
-            rows = Arrays.copyOf(rows, count * 2);
-            cols = Arrays.copyOf(cols, count * 2);
-            vals = Arrays.copyOf(vals, count * 2);
-        }
-        rows[count] = row;
-        cols[count] = col;
-        vals[count] = value;
-        count++;
+    }
+
+    /** Entries of L and U of the last condensed factorisation; 0 when there is none. */
+    int condensedFactorEntries() {
+        return plan == null || plan.lu == null ? 0 : plan.lu.factorEntries();
     }
 
     /**
@@ -118,6 +121,10 @@ final class LinearStep implements Jacobian {
     }
 
     private double[] solveDense(double[] rhs, double[] rowScale, double[] colScale) {
+        int[] rows = current.rows;
+        int[] cols = current.cols;
+        double[] vals = current.vals;
+        int count = current.count;
         DMatrixRMaj a = new DMatrixRMaj(n, n);
         double[] d = a.data;
         for (int k = 0; k < count; k++) {
@@ -141,23 +148,23 @@ final class LinearStep implements Jacobian {
      * worked out once and later iterations only fill in numbers.
      */
     private double[] solveSparse(double[] rhs, double[] rowScale, double[] colScale) {
+        int[] rows = current.rows;
+        int[] cols = current.cols;
+        double[] vals = current.vals;
+        int count = current.count;
         if (plan == null || !plan.fits(rows, cols, count)) {
-            plan = Plan.make(n, eliminable, rows, cols, count);
-            work = null;
+            plan = Plan.make(n, eliminable, rows, cols, count, bandOrdering);
             if (plan == null) {
                 return solveSparseFull(rhs, rowScale, colScale);
             }
         }
         Plan pl = plan;
-        double[] pivot = new double[n];
-        double[] rowVal = new double[pl.rowSlots];
-        double[] colVal = new double[pl.colSlots];
-        if (work == null) {
-            work = pl.matrix.copy();
-        }
-        DMatrixSparseCSC a = work;
-        double[] nz = a.nz_values;
-        java.util.Arrays.fill(nz, 0, a.nz_length, 0);
+        double[] pivot = pl.pivot;
+        double[] rowVal = pl.rowVal;
+        double[] colVal = pl.colVal;
+        double[] nz = pl.values;
+        Arrays.fill(pivot, 0);
+        Arrays.fill(nz, 0);
         for (int k = 0; k < count; k++) {
             double v = vals[k] * colScale[cols[k]] / rowScale[rows[k]];
             int d = pl.dest[k];
@@ -168,7 +175,8 @@ final class LinearStep implements Jacobian {
                 default -> nz[d] += v;
             }
         }
-        double[] b = rhs.clone();
+        double[] b = pl.b;
+        System.arraycopy(rhs, 0, b, 0, n);
         int f = 0;
         for (int e = 0; e < pl.elim.length; e++) {
             int k = pl.elim[e];
@@ -184,26 +192,23 @@ final class LinearStep implements Jacobian {
                 }
             }
         }
-        if (condensedLu == null) {
-            condensedLu = LinearSolverFactory_DSCC.lu(FillReducing.NONE);
+        if (pl.lu == null) {
+            pl.lu = new SparseLu(pl.m, pl.colPtr, pl.rowIdx, null);
         }
-        LinearSolverSparse<DMatrixSparseCSC, DMatrixRMaj> lu = condensedLu;
-        if (!lu.setA(a)) {
+        if (!pl.lu.factor(nz)) {
             return null;
         }
-        int m = pl.m;
-        DMatrixRMaj bb = new DMatrixRMaj(m, 1);
+        double[] y = pl.y;
         for (int i = 0; i < n; i++) {
             if (pl.place[i] >= 0) {
-                bb.data[pl.place[i]] = b[i];
+                y[pl.place[i]] = b[i];
             }
         }
-        DMatrixRMaj y = new DMatrixRMaj(m, 1);
-        lu.solve(bb, y);
+        pl.lu.solve(y, y);
         double[] out = new double[n];
         for (int i = 0; i < n; i++) {
             if (pl.place[i] >= 0) {
-                out[i] = y.data[pl.place[i]];
+                out[i] = y[pl.place[i]];
             }
         }
         for (int e = 0; e < pl.elim.length; e++) {
@@ -217,10 +222,8 @@ final class LinearStep implements Jacobian {
         return finite(out) ? out : null;
     }
 
+    /** The current sparsity pattern's condensation, numbering, work arrays and factorisation. */
     private Plan plan;
-    /** The condensed matrix of the current plan, refilled every iteration; its LU keeps its workspaces. */
-    private DMatrixSparseCSC work;
-    private LinearSolverSparse<DMatrixSparseCSC, DMatrixRMaj> condensedLu;
 
     /** Where each Jacobian entry goes in the condensed, renumbered sparse matrix. */
     private static final class Plan {
@@ -244,7 +247,17 @@ final class LinearStep implements Jacobian {
         int[] fill;
         int rowSlots;
         int colSlots;
-        DMatrixSparseCSC matrix;
+        /** Pattern of the condensed matrix (compressed columns, rows sorted) in the new numbering. */
+        int[] colPtr;
+        int[] rowIdx;
+        // work arrays of solveSparse, refilled every iteration
+        double[] values;
+        double[] pivot;
+        double[] rowVal;
+        double[] colVal;
+        double[] b;
+        double[] y;
+        SparseLu lu;
 
         boolean fits(int[] rows, int[] cols, int count) {
             if (count != rowsSeen.length) {
@@ -258,7 +271,7 @@ final class LinearStep implements Jacobian {
             return true;
         }
 
-        static Plan make(int n, boolean[] eliminable, int[] rows, int[] cols, int count) {
+        static Plan make(int n, boolean[] eliminable, int[] rows, int[] cols, int count, boolean band) {
             Plan p = new Plan();
             p.rowsSeen = Arrays.copyOf(rows, count);
             p.colsSeen = Arrays.copyOf(cols, count);
@@ -343,7 +356,8 @@ final class LinearStep implements Jacobian {
                     }
                 }
             }
-            int[] perm = Ordering.reverseCuthillMcKee(m, pr, pc, total);
+            int[] perm = band ? Ordering.reverseCuthillMcKee(m, pr, pc, total)
+                    : Ordering.minimumDegree(m, pr, pc, total);
             int[] inverse = new int[m];
             for (int i = 0; i < m; i++) {
                 inverse[perm[i]] = i;
@@ -365,18 +379,22 @@ final class LinearStep implements Jacobian {
                     sorted[unique++] = sorted[t];
                 }
             }
-            DMatrixSparseCSC a = new DMatrixSparseCSC(m, m, unique);
-            a.nz_length = unique;
+            p.colPtr = new int[m + 1];
+            p.rowIdx = new int[unique];
             for (int t = 0; t < unique; t++) {
                 int col = (int) (sorted[t] / m);
-                a.nz_rows[t] = (int) (sorted[t] % m);
-                a.col_idx[col + 1]++;
+                p.rowIdx[t] = (int) (sorted[t] % m);
+                p.colPtr[col + 1]++;
             }
             for (int c = 0; c < m; c++) {
-                a.col_idx[c + 1] += a.col_idx[c];
+                p.colPtr[c + 1] += p.colPtr[c];
             }
-            a.indicesSorted = true;
-            p.matrix = a;
+            p.values = new double[unique];
+            p.pivot = new double[n];
+            p.rowVal = new double[p.rowSlots];
+            p.colVal = new double[p.colSlots];
+            p.b = new double[n];
+            p.y = new double[m];
             long[] uniq = Arrays.copyOf(sorted, unique);
             int t = 0;
             for (int k = 0; k < count; k++) {
@@ -396,6 +414,10 @@ final class LinearStep implements Jacobian {
     private int[] fullInverse;
 
     private double[] solveSparseFull(double[] rhs, double[] rowScale, double[] colScale) {
+        int[] rows = current.rows;
+        int[] cols = current.cols;
+        double[] vals = current.vals;
+        int count = current.count;
         if (fullPerm == null) {
             fullPerm = Ordering.reverseCuthillMcKee(n, rows, cols, count);
             fullInverse = new int[n];

@@ -6,8 +6,8 @@ import java.util.Arrays;
 import java.util.List;
 
 /**
- * Reverse Cuthill–McKee numbering of a square sparsity pattern (symmetrised). EJML's sparse LU has no
- * usable fill-reducing ordering, so the unknowns are renumbered here, which keeps the factor banded.
+ * Numberings of a square sparsity pattern (symmetrised, the diagonal ignored) for sparse LU: reverse
+ * Cuthill–McKee, which keeps the factor banded, and minimum degree, which keeps it sparse.
  */
 final class Ordering {
     private Ordering() {
@@ -73,5 +73,131 @@ final class Ordering {
             perm[i] = order[n - 1 - i];
         }
         return perm;
+    }
+
+    /**
+     * Minimum degree numbering of the pattern of A + Aᵀ, perm[newIndex] = oldIndex. Works on the elimination
+     * graph itself: eliminating a node joins its remaining neighbours into a clique and drops it from their
+     * lists; the next node is one of least current (exact) degree, taken from degree buckets. Cheap when the
+     * elimination fills little, as in circuit matrices.
+     */
+    static int[] minimumDegree(int n, int[] rows, int[] cols, int count) {
+        int[] len = new int[n];
+        for (int k = 0; k < count; k++) {
+            int r = rows[k];
+            int c = cols[k];
+            if (r < 0 || c < 0 || r >= n || c >= n) {
+                throw new IllegalArgumentException("ordering: entry (" + r + ", " + c + ") outside 0.." + (n - 1));
+            }
+            if (r != c) {
+                len[r]++;
+                len[c]++;
+            }
+        }
+        int[][] adj = new int[n][];
+        for (int i = 0; i < n; i++) {
+            adj[i] = new int[Math.max(4, len[i])];
+            len[i] = 0;
+        }
+        int[] mark = new int[n];
+        int stamp = 0;
+        for (int k = 0; k < count; k++) {
+            int r = rows[k];
+            int c = cols[k];
+            if (r != c) {
+                adj[r][len[r]++] = c;
+                adj[c][len[c]++] = r;
+            }
+        }
+        // drop repeated neighbours
+        for (int i = 0; i < n; i++) {
+            stamp++;
+            int[] a = adj[i];
+            int m = 0;
+            for (int t = 0; t < len[i]; t++) {
+                int j = a[t];
+                if (mark[j] != stamp) {
+                    mark[j] = stamp;
+                    a[m++] = j;
+                }
+            }
+            len[i] = m;
+        }
+        // degree buckets: doubly linked lists, head[d] = first node of degree d
+        int[] head = new int[n];
+        int[] nextInBucket = new int[n];
+        int[] prevInBucket = new int[n];
+        int[] degree = new int[n];
+        Arrays.fill(head, -1);
+        for (int i = n - 1; i >= 0; i--) {
+            degree[i] = len[i];
+            insert(head, nextInBucket, prevInBucket, i, degree[i]);
+        }
+        int[] perm = new int[n];
+        int minDegree = 0;
+        for (int k = 0; k < n; k++) {
+            while (head[minDegree] < 0) {
+                minDegree++;
+            }
+            int v = head[minDegree];
+            remove(head, nextInBucket, prevInBucket, v, degree[v]);
+            perm[k] = v;
+            int[] nv = adj[v];
+            int lv = len[v];
+            for (int t = 0; t < lv; t++) {
+                int u = nv[t];
+                // u's new neighbours: its old ones without v, and v's other neighbours
+                stamp++;
+                int[] au = adj[u];
+                int lu = 0;
+                for (int s = 0; s < len[u]; s++) {
+                    int w = au[s];
+                    if (w != v) {
+                        au[lu++] = w;
+                        mark[w] = stamp;
+                    }
+                }
+                mark[u] = stamp;
+                for (int s = 0; s < lv; s++) {
+                    int w = nv[s];
+                    if (mark[w] != stamp) {
+                        if (lu == au.length) {
+                            au = Arrays.copyOf(au, 2 * au.length);
+                            adj[u] = au;
+                        }
+                        au[lu++] = w;
+                    }
+                }
+                len[u] = lu;
+                if (lu != degree[u]) {
+                    remove(head, nextInBucket, prevInBucket, u, degree[u]);
+                    degree[u] = lu;
+                    insert(head, nextInBucket, prevInBucket, u, lu);
+                    minDegree = Math.min(minDegree, lu);
+                }
+            }
+            adj[v] = null;
+        }
+        return perm;
+    }
+
+    private static void insert(int[] head, int[] next, int[] prev, int node, int d) {
+        next[node] = head[d];
+        prev[node] = -1;
+        if (head[d] >= 0) {
+            prev[head[d]] = node;
+        }
+        head[d] = node;
+    }
+
+    private static void remove(int[] head, int[] next, int[] prev, int node, int d) {
+        if (prev[node] >= 0) {
+            next[prev[node]] = next[node];
+        } else {
+            head[d] = next[node];
+        }
+        if (next[node] >= 0) {
+            prev[next[node]] = prev[node];
+        }
     }
 }

@@ -1,0 +1,381 @@
+package spoolwork.solver.numeric;
+
+import java.util.Arrays;
+
+/**
+ * Sparse LU factorisation P·A·Q = L·U of a square matrix whose sparsity pattern is fixed, for solving
+ * many systems that share that pattern.
+ *
+ * <p>The pattern (compressed sparse columns) and a column order Q are given once. The first
+ * {@link #factor(double[])} is a left-looking factorisation with threshold partial pivoting
+ * (Gilbert–Peierls): column k of L and U comes from one sparse triangular solve whose nonzero pattern is
+ * found by a depth-first search, and the pivot is the diagonal entry (row Q[k]) when it is at least
+ * {@link #PIVOT_TOLERANCE} times the largest candidate, else the largest candidate. Later calls with new
+ * values keep the row order and the patterns of L and U and only redo the arithmetic, without searching
+ * and without allocating. A refactorisation falls back to pivoting when a kept pivot no longer passes the
+ * same threshold test against the candidates of its column, so the bound on the entries of L
+ * (|l| ≤ 1/{@link #PIVOT_TOLERANCE}) holds in both cases; the columns before the failed one have passed
+ * the test with the new values and are kept, the search starts again at the failed column.
+ *
+ * <p>A matrix is reported singular ({@code false}) when a column has no usable pivot: every candidate is
+ * zero, or the largest is below {@link #SINGULAR_TOLERANCE} times the largest magnitude met in that
+ * column (of A or of its partly reduced form), or a value is not finite.
+ */
+final class SparseLu {
+    /** A diagonal pivot is kept while it is at least this fraction of the largest candidate. */
+    static final double PIVOT_TOLERANCE = 1e-3;
+    /** Relative size below which the best pivot of a column counts as zero. */
+    static final double SINGULAR_TOLERANCE = 1e-14;
+
+    private final int n;
+    private final int[] ap;
+    private final int[] ai;
+    private final int[] q;
+
+    // factors, in pivot numbering: column k of L starts with its unit diagonal, column k of U ends with
+    // its pivot; the off-diagonal entries of U are in an order valid for the forward elimination
+    private int[] lp;
+    private int[] li;
+    private double[] lx;
+    private int[] up;
+    private int[] ui;
+    private double[] ux;
+    /** pinv[row of A] = pivot position; row[pivot position] = row of A. */
+    private final int[] pinv;
+    private final int[] prow;
+    private boolean factored;
+    private int fresh;
+
+    private final double[] x;
+    private final int[] xi;
+    private final int[] stack;
+    private final int[] next;
+    private final int[] mark;
+    private int stamp;
+
+    /**
+     * @param colPtr column starts of the pattern of A, length n + 1
+     * @param rowIdx row of each stored entry; no row twice in a column
+     * @param order  column order Q (order[k] = column of A taken k-th), or null for the natural order
+     */
+    SparseLu(int n, int[] colPtr, int[] rowIdx, int[] order) {
+        if (colPtr.length != n + 1 || colPtr[0] != 0 || colPtr[n] > rowIdx.length) {
+            throw new IllegalArgumentException("sparse LU: column starts do not describe " + n + " columns");
+        }
+        this.n = n;
+        this.ap = colPtr.clone();
+        this.ai = Arrays.copyOf(rowIdx, colPtr[n]);
+        for (int j = 0; j < n; j++) {
+            for (int p = ap[j]; p < ap[j + 1]; p++) {
+                if (ai[p] < 0 || ai[p] >= n) {
+                    throw new IllegalArgumentException(
+                            "sparse LU: row " + ai[p] + " in column " + j + " outside 0.." + (n - 1));
+                }
+            }
+        }
+        if (order == null) {
+            q = new int[n];
+            for (int k = 0; k < n; k++) {
+                q[k] = k;
+            }
+        } else {
+            if (order.length != n) {
+                throw new IllegalArgumentException(
+                        "sparse LU: column order has " + order.length + " entries, not " + n);
+            }
+            q = order.clone();
+            boolean[] seen = new boolean[n];
+            for (int c : q) {
+                if (c < 0 || c >= n || seen[c]) {
+                    throw new IllegalArgumentException("sparse LU: column order is not a permutation (at " + c + ")");
+                }
+                seen[c] = true;
+            }
+        }
+        pinv = new int[n];
+        prow = new int[n];
+        x = new double[n];
+        xi = new int[n];
+        stack = new int[n];
+        next = new int[n];
+        mark = new int[n];
+        int guess = 4 * ap[n] + n;
+        lp = new int[n + 1];
+        up = new int[n + 1];
+        li = new int[guess];
+        lx = new double[guess];
+        ui = new int[guess];
+        ux = new double[guess];
+    }
+
+    int size() {
+        return n;
+    }
+
+    /** Entries of L and U together, the unit diagonal of L included; 0 before the first factorisation. */
+    int factorEntries() {
+        return factored ? lp[n] + up[n] : 0;
+    }
+
+    /**
+     * How many factorisations searched for pivots, from the first column or from the column where a
+     * refactorisation failed; the others reused the stored order throughout.
+     */
+    int pivotingFactorisations() {
+        return fresh;
+    }
+
+    /**
+     * Factors the matrix with the given values (values[p] belongs to the p-th stored entry of the pattern).
+     * Reuses the previous pivot order and patterns when it is still acceptable.
+     *
+     * @return false when the matrix is singular or holds a value that is not finite
+     */
+    boolean factor(double[] values) {
+        for (int p = 0; p < ap[n]; p++) {
+            if (!Double.isFinite(values[p])) {
+                factored = false;
+                return false;
+            }
+        }
+        int from = 0;
+        if (factored) {
+            from = refactor(values);
+            if (from < 0) {
+                return true;
+            }
+        }
+        factored = pivotingFactor(values, from);
+        return factored;
+    }
+
+    /**
+     * Left-looking LU with threshold partial pivoting from column {@code from} on; finds the patterns of L
+     * and U. Columns before {@code from} must hold a valid factorisation of the same values.
+     */
+    private boolean pivotingFactor(double[] values, int from) {
+        fresh++;
+        Arrays.fill(x, 0);
+        if (from == 0) {
+            Arrays.fill(pinv, -1);
+        } else {
+            // keep columns 0..from−1 and their pivot rows; L goes back to rows of A while the search runs
+            for (int p = 0; p < lp[from]; p++) {
+                li[p] = prow[li[p]];
+            }
+            for (int k = from; k < n; k++) {
+                pinv[prow[k]] = -1;
+            }
+        }
+        int lnz = lp[from];
+        int unz = up[from];
+        for (int k = from; k < n; k++) {
+            lp[k] = lnz;
+            up[k] = unz;
+            if (lnz + n > li.length) {
+                int size = Math.max(2 * li.length, lnz + n);
+                li = Arrays.copyOf(li, size);
+                lx = Arrays.copyOf(lx, size);
+            }
+            if (unz + n > ui.length) {
+                int size = Math.max(2 * ui.length, unz + n);
+                ui = Arrays.copyOf(ui, size);
+                ux = Arrays.copyOf(ux, size);
+            }
+            int col = q[k];
+            int top = reach(col);
+            double big = 0;
+            for (int p = ap[col]; p < ap[col + 1]; p++) {
+                x[ai[p]] = values[p];
+                big = Math.max(big, Math.abs(values[p]));
+            }
+            // x = L \ A(:,col), in the topological order left by the search; L's rows are still rows of A
+            for (int t = top; t < n; t++) {
+                int j = xi[t];
+                int jj = pinv[j];
+                if (jj < 0) {
+                    continue;
+                }
+                double xj = x[j];
+                for (int p = lp[jj] + 1; p < lp[jj + 1]; p++) {
+                    x[li[p]] -= lx[p] * xj;
+                }
+            }
+            int ipiv = -1;
+            double best = -1;
+            for (int t = top; t < n; t++) {
+                int i = xi[t];
+                double v = Math.abs(x[i]);
+                big = Math.max(big, v);
+                if (pinv[i] < 0) {
+                    if (v > best) {
+                        best = v;
+                        ipiv = i;
+                    }
+                } else {
+                    ui[unz] = pinv[i];
+                    ux[unz++] = x[i];
+                }
+            }
+            if (ipiv < 0 || !(best > SINGULAR_TOLERANCE * big) || !Double.isFinite(big)) {
+                Arrays.fill(x, 0);
+                return false;
+            }
+            if (pinv[col] < 0 && Math.abs(x[col]) >= PIVOT_TOLERANCE * best) {
+                ipiv = col;
+            }
+            double pivot = x[ipiv];
+            ui[unz] = k;
+            ux[unz++] = pivot;
+            pinv[ipiv] = k;
+            prow[k] = ipiv;
+            li[lnz] = ipiv;
+            lx[lnz++] = 1;
+            for (int t = top; t < n; t++) {
+                int i = xi[t];
+                if (pinv[i] < 0) {
+                    li[lnz] = i;
+                    lx[lnz++] = x[i] / pivot;
+                }
+                x[i] = 0;
+            }
+        }
+        lp[n] = lnz;
+        up[n] = unz;
+        for (int p = 0; p < lnz; p++) {
+            li[p] = pinv[li[p]];
+        }
+        return true;
+    }
+
+    /**
+     * Rows reachable from the pattern of A(:,col) through the columns of L found so far, in topological
+     * order in xi[top..n−1] (non-recursive depth-first search).
+     */
+    private int reach(int col) {
+        stamp++;
+        if (stamp == Integer.MAX_VALUE) {
+            Arrays.fill(mark, 0);
+            stamp = 1;
+        }
+        int top = n;
+        for (int p = ap[col]; p < ap[col + 1]; p++) {
+            int start = ai[p];
+            if (mark[start] == stamp) {
+                continue;
+            }
+            int head = 0;
+            stack[0] = start;
+            mark[start] = stamp;
+            next[0] = pinv[start] < 0 ? -1 : lp[pinv[start]] + 1;
+            while (head >= 0) {
+                int j = stack[head];
+                int jj = pinv[j];
+                boolean descended = false;
+                if (jj >= 0) {
+                    int end = lp[jj + 1];
+                    for (int t = next[head]; t < end; t++) {
+                        int i = li[t];
+                        if (mark[i] != stamp) {
+                            next[head] = t + 1;
+                            mark[i] = stamp;
+                            head++;
+                            stack[head] = i;
+                            next[head] = pinv[i] < 0 ? -1 : lp[pinv[i]] + 1;
+                            descended = true;
+                            break;
+                        }
+                    }
+                }
+                if (!descended) {
+                    head--;
+                    xi[--top] = j;
+                }
+            }
+        }
+        return top;
+    }
+
+    /**
+     * Numeric factorisation along the stored pivot order and patterns.
+     *
+     * @return −1 when done, else the first column whose pivot failed the test
+     */
+    private int refactor(double[] values) {
+        for (int k = 0; k < n; k++) {
+            int col = q[k];
+            for (int p = up[k]; p < up[k + 1]; p++) {
+                x[ui[p]] = 0;
+            }
+            for (int p = lp[k]; p < lp[k + 1]; p++) {
+                x[li[p]] = 0;
+            }
+            double big = 0;
+            for (int p = ap[col]; p < ap[col + 1]; p++) {
+                x[pinv[ai[p]]] = values[p];
+                big = Math.max(big, Math.abs(values[p]));
+            }
+            int diag = up[k + 1] - 1;
+            for (int p = up[k]; p < diag; p++) {
+                int j = ui[p];
+                double xj = x[j];
+                ux[p] = xj;
+                big = Math.max(big, Math.abs(xj));
+                for (int t = lp[j] + 1; t < lp[j + 1]; t++) {
+                    x[li[t]] -= lx[t] * xj;
+                }
+            }
+            double pivot = x[k];
+            double best = Math.abs(pivot);
+            for (int t = lp[k] + 1; t < lp[k + 1]; t++) {
+                best = Math.max(best, Math.abs(x[li[t]]));
+            }
+            big = Math.max(big, best);
+            if (!(Math.abs(pivot) >= PIVOT_TOLERANCE * best) || !(best > SINGULAR_TOLERANCE * big)
+                    || !Double.isFinite(big)) {
+                return k;
+            }
+            ux[diag] = pivot;
+            for (int t = lp[k] + 1; t < lp[k + 1]; t++) {
+                lx[t] = x[li[t]] / pivot;
+            }
+        }
+        return -1;
+    }
+
+    /**
+     * Solves A·out = b with the last successful factorisation; b and out may be the same array. Uses only
+     * the object's own work array.
+     */
+    void solve(double[] b, double[] out) {
+        if (!factored) {
+            throw new IllegalStateException("sparse LU: solve before a successful factorisation");
+        }
+        double[] y = x;
+        for (int k = 0; k < n; k++) {
+            y[k] = b[prow[k]];
+        }
+        for (int k = 0; k < n; k++) {
+            double yk = y[k];
+            if (yk != 0) {
+                for (int p = lp[k] + 1; p < lp[k + 1]; p++) {
+                    y[li[p]] -= lx[p] * yk;
+                }
+            }
+        }
+        for (int k = n - 1; k >= 0; k--) {
+            int diag = up[k + 1] - 1;
+            double yk = y[k] / ux[diag];
+            y[k] = yk;
+            if (yk != 0) {
+                for (int p = up[k]; p < diag; p++) {
+                    y[ui[p]] -= ux[p] * yk;
+                }
+            }
+        }
+        for (int k = 0; k < n; k++) {
+            out[q[k]] = y[k];
+        }
+        Arrays.fill(y, 0);
+    }
+}
