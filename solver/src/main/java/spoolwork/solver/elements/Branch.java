@@ -15,6 +15,7 @@ public class Branch extends Element {
     protected final DropLaw law;
     protected final PowerKind kind;
     protected int q;
+    private final double[] slope = new double[1];
 
     public Branch(String owner, int a, String portA, int b, String portB, DropLaw law, PowerKind kind, Network net) {
         super(owner);
@@ -33,7 +34,7 @@ public class Branch extends Element {
 
     @Override
     public void load(double[] x, double[] f, Jacobian j, Network net) {
-        double[] d = new double[1];
+        double[] d = slope;
         double flow = x[q];
         double r = law.drop(flow, d);
         addF(f, a, -flow);

@@ -10,8 +10,8 @@ import spoolwork.solver.numeric.Jacobian;
  * minimum drop available the compensator is idle (λ = 0) and the valve is an open throttle.
  */
 public final class FlowControl extends Element {
-    /** Scale of the compensator drop in its complementarity row, Pa. */
-    private static final double DROP_SCALE = 1e5;
+    /** Scale of the compensator drop in its complementarity row: the circuit's typical pressure, Pa. */
+    private final double dropScale;
 
     private final int a;
     private final int b;
@@ -33,6 +33,7 @@ public final class FlowControl extends Element {
         this.set = setFlow;
         this.open = DropLaw.rated(setFlow, minimumDrop);
         this.q = net.add(Network.Kind.FLOW, owner, net.flowRef(), net.pressureRef(), net.pressureTolerance());
+        this.dropScale = net.pressureRef();
         this.up = net.add(Network.Kind.COMPLEMENTARITY, owner, net.pressureRef(), 1, 1e-9);
         this.down = net.add(Network.Kind.COMPLEMENTARITY, owner, net.pressureRef(), 1, 1e-9);
         this.upCols = new int[]{up, q};
@@ -57,11 +58,11 @@ public final class FlowControl extends Element {
         addJ(j, q, q, -dr[0]);
         addJ(j, q, up, -1);
         addJ(j, q, down, 1);
-        da[0] = 1 / DROP_SCALE;
+        da[0] = 1 / dropScale;
         db[1] = -1 / set;
-        net.complementarity(up, x[up] / DROP_SCALE, (set - flow) / set, upCols, da, db, f, j);
+        net.complementarity(up, x[up] / dropScale, (set - flow) / set, upCols, da, db, f, j);
         db[1] = 1 / set;
-        net.complementarity(down, x[down] / DROP_SCALE, (set + flow) / set, downCols, da, db, f, j);
+        net.complementarity(down, x[down] / dropScale, (set + flow) / set, downCols, da, db, f, j);
     }
 
     @Override

@@ -18,6 +18,8 @@ public final class LineLaw implements DropLaw {
     private final double nu;
     private final double relRoughness;
     private final double area;
+    /** Scratch for the friction factor's derivative; a law object serves one line of one solve. */
+    private final double[] dfScratch = new double[1];
 
     /**
      * @param diameter  inner diameter, m
@@ -80,7 +82,7 @@ public final class LineLaw implements DropLaw {
         double s = Math.min(1, (re - RE_LAMINAR) / (RE_TURBULENT - RE_LAMINAR));
         double w = s * s * (3 - 2 * s);
         double dw = re < RE_TURBULENT ? 6 * s * (1 - s) / (RE_TURBULENT - RE_LAMINAR) * dre : 0;
-        double[] df = new double[1];
+        double[] df = dfScratch;
         double f = haaland(re, relRoughness, df);
         double dyn = length / d * rho / 2;
         double turb = f * dyn * v * Math.abs(v);

@@ -188,6 +188,7 @@ public final class Network implements NonlinearSystem {
             pairCols = new int[n][];
             gradA = new double[n][];
             gradB = new double[n][];
+            stampedAt = new int[n];
         }
     }
 
@@ -220,6 +221,7 @@ public final class Network implements NonlinearSystem {
             gradB[row] = new double[cols.length];
         }
         boolean useA = side[row] == 0;
+        stampedAt[row] = j.size();
         for (int k = 0; k < cols.length; k++) {
             pairCols[row][k] = cols[k];
             gradA[row][k] = da[k];
@@ -228,6 +230,33 @@ public final class Network implements NonlinearSystem {
                 j.add(row, cols[k], useA ? da[k] : db[k]);
             }
         }
+    }
+
+    /** Where each complementarity row's entries start in the Jacobian it was last stamped into; −1 unknown. */
+    private int[] stampedAt;
+
+    @Override
+    public boolean restampSides(Jacobian j) {
+        if (side == null) {
+            return true;
+        }
+        for (int row = 0; row < side.length; row++) {
+            if (side[row] < 0 || pairCols[row] == null) {
+                continue;
+            }
+            int at = stampedAt[row];
+            if (at < 0) {
+                return false;
+            }
+            boolean useA = side[row] == 0;
+            int[] cols = pairCols[row];
+            for (int k = 0; k < cols.length; k++) {
+                if (cols[k] >= 0) {
+                    j.set(at++, useA ? gradA[row][k] : gradB[row][k]);
+                }
+            }
+        }
+        return true;
     }
 
     @Override
@@ -306,6 +335,11 @@ public final class Network implements NonlinearSystem {
     @Override
     public boolean eliminable(int i) {
         return kinds.get(i) == Kind.FLOW;
+    }
+
+    @Override
+    public boolean switchesSides(int i) {
+        return kinds.get(i) == Kind.COMPLEMENTARITY;
     }
 
     @Override

@@ -8,8 +8,11 @@ import spoolwork.solver.numeric.Jacobian;
  * further (see {@link Network#complementarity}). Exact at the closed/open switch, no smoothing.
  */
 public abstract class OneWayValve extends Element {
-    /** Scale of the margin in the complementarity row, Pa. */
-    static final double MARGIN_SCALE = 1e5;
+    /**
+     * Scale of the margin in the complementarity row, Pa: the circuit's typical pressure, so that the row's
+     * pressure derivatives are of the same size as the node rows' and one pivot order suits both sides.
+     */
+    private final double marginScale;
     /** Corner width of smooth max/min inside margins, Pa. */
     static final double CORNER = 100;
 
@@ -31,6 +34,7 @@ public abstract class OneWayValve extends Element {
         this.portB = portB;
         this.qs = flowScale;
         this.q = net.add(Network.Kind.COMPLEMENTARITY, owner, net.flowRef(), 1, 1e-9);
+        this.marginScale = net.pressureRef();
         this.cols = new int[]{q, a, b, pilot};
     }
 
@@ -49,14 +53,17 @@ public abstract class OneWayValve extends Element {
         double m = margin(p(xs, a), p(xs, b), p(xs, x), flow, dm);
         // a side: the flow (shut when zero); b side: the margin (open when zero); columns q, a, b, x
         da[0] = 1 / qs;
-        db[0] = dm[3] / MARGIN_SCALE;
-        db[1] = dm[0] / MARGIN_SCALE;
-        db[2] = dm[1] / MARGIN_SCALE;
-        db[3] = dm[2] / MARGIN_SCALE;
-        net.complementarity(q, flow / qs, m / MARGIN_SCALE, cols, da, db, f, j);
+        db[0] = dm[3] / marginScale;
+        db[1] = dm[0] / marginScale;
+        db[2] = dm[1] / marginScale;
+        db[3] = dm[2] / marginScale;
+        net.complementarity(q, flow / qs, m / marginScale, cols, da, db, f, j);
     }
 
     private final int[] cols;
+    /** Scratch for the margins' inner derivatives. */
+    protected final double[] t1 = new double[1];
+    protected final double[] s2 = new double[2];
     private final double[] dm = new double[4];
     private final double[] da = new double[4];
     private final double[] db = new double[4];
@@ -129,7 +136,7 @@ public abstract class OneWayValve extends Element {
 
         @Override
         protected double margin(double pa, double pb, double px, double flow, double[] d) {
-            double[] t = new double[1];
+            double[] t = t1;
             double r = law.drop(flow, t);
             d[0] = -1;
             d[1] = 1;
@@ -162,9 +169,9 @@ public abstract class OneWayValve extends Element {
 
         @Override
         protected double margin(double pa, double pb, double px, double flow, double[] d) {
-            double[] t = new double[1];
+            double[] t = t1;
             double r = open.drop(flow, t);
-            double[] s = new double[2];
+            double[] s = s2;
             double need = Laws.smoothMax(crack + slope * flow, pb + r, CORNER, s);
             d[0] = -1;
             d[1] = s[1];
@@ -197,9 +204,9 @@ public abstract class OneWayValve extends Element {
 
         @Override
         protected double margin(double pa, double pb, double px, double flow, double[] d) {
-            double[] t = new double[1];
+            double[] t = t1;
             double r = open.drop(flow, t);
-            double[] s = new double[2];
+            double[] s = s2;
             double held = Laws.smoothMin(setting - slope * flow, pa - r, CORNER, s);
             d[0] = -s[1];
             d[1] = 1;
@@ -235,9 +242,9 @@ public abstract class OneWayValve extends Element {
 
         @Override
         protected double margin(double pa, double pb, double px, double flow, double[] d) {
-            double[] t = new double[1];
+            double[] t = t1;
             double r = open.drop(flow, t);
-            double[] s = new double[2];
+            double[] s = s2;
             double need = Laws.smoothMax(setting - ratio * px + slope * flow, pb + r, CORNER, s);
             d[0] = -1;
             d[1] = s[1];

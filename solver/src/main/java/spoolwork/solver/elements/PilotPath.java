@@ -17,6 +17,8 @@ public final class PilotPath extends Element {
     private final double crack;
     private final double kq;
     private final double dpt;
+    private final double[] t1 = new double[1];
+    private final double[] d3 = new double[3];
 
     public PilotPath(String owner, int a, int b, int x, double ratio, double crack, double rated, double ratedDrop) {
         super(owner);
@@ -31,7 +33,7 @@ public final class PilotPath extends Element {
 
     /** Flow B → A, m³/s; d = ∂/∂p_a, ∂/∂p_b, ∂/∂p_x. */
     double flow(double pa, double pb, double px, double[] d) {
-        double[] t = new double[1];
+        double[] t = t1;
         double u = (ratio * px - (pb - pa) - crack) / BAND;
         double s = Laws.smoothUnit(u, 1e-3, t);
         double ds = t[0] / BAND;
@@ -45,7 +47,7 @@ public final class PilotPath extends Element {
 
     @Override
     public void load(double[] xs, double[] f, Jacobian j, Network net) {
-        double[] d = new double[3];
+        double[] d = d3;
         double qr = flow(p(xs, a), p(xs, b), p(xs, x), d);
         addF(f, b, -qr);
         addF(f, a, qr);

@@ -72,10 +72,11 @@ public final class Pump extends Element {
     public void load(double[] x, double[] f, Jacobian j, Network net) {
         double ps = p(x, s);
         double pOut = p(x, pp);
-        double[] d = new double[1];
+        double[] d = db;
         double k = stroke(x, pOut, d);
+        double dk = d[0];
         double qg = net.sourceScale() * geometric * k;
-        double dqg = net.sourceScale() * geometric * d[0];
+        double dqg = net.sourceScale() * geometric * dk;
         if (compensated) {
             double gs = net.sourceScale() * geometric;
             addJ(j, s, full, gs);

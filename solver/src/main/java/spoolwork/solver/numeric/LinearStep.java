@@ -28,6 +28,8 @@ final class LinearStep implements Jacobian {
     private boolean bandOrdering;
 
     private final boolean[] eliminable;
+    /** Unknowns of complementarity rows, numbered after a neighbour (see Ordering#minimumDegree). */
+    private final boolean[] delayed;
 
     LinearStep(int n, LinearMethod method) {
         this(n, method, null);
@@ -37,9 +39,11 @@ final class LinearStep implements Jacobian {
         this.n = n;
         this.dense = method == LinearMethod.DENSE || (method == LinearMethod.AUTO && n <= LinearMethod.DENSE_LIMIT);
         this.eliminable = new boolean[n];
+        this.delayed = new boolean[n];
         if (s != null && !dense) {
             for (int i = 0; i < n; i++) {
                 eliminable[i] = s.eliminable(i);
+                delayed[i] = s.switchesSides(i);
             }
         }
     }
@@ -72,6 +76,16 @@ final class LinearStep implements Jacobian {
             vals[count] = value;
             count++;
         }
+
+        @Override
+        public int size() {
+            return count;
+        }
+
+        @Override
+        public void set(int index, double value) {
+            vals[index] = value;
+        }
     }
 
     /**
@@ -94,6 +108,16 @@ final class LinearStep implements Jacobian {
     @Override
     public void add(int row, int col, double value) {
         current.add(row, col, value);
+    }
+
+    @Override
+    public int size() {
+        return current.count;
+    }
+
+    @Override
+    public void set(int index, double value) {
+        current.vals[index] = value;
     }
 
     /**
@@ -153,7 +177,7 @@ final class LinearStep implements Jacobian {
         double[] vals = current.vals;
         int count = current.count;
         if (plan == null || !plan.fits(rows, cols, count)) {
-            plan = Plan.make(n, eliminable, rows, cols, count, bandOrdering);
+            plan = Plan.make(n, eliminable, delayed, rows, cols, count, bandOrdering);
             if (plan == null) {
                 return solveSparseFull(rhs, rowScale, colScale);
             }
@@ -195,16 +219,20 @@ final class LinearStep implements Jacobian {
         if (pl.lu == null) {
             pl.lu = new SparseLu(pl.m, pl.colPtr, pl.rowIdx, null);
         }
-        if (!pl.lu.factor(nz)) {
-            return null;
-        }
         double[] y = pl.y;
         for (int i = 0; i < n; i++) {
             if (pl.place[i] >= 0) {
                 y[pl.place[i]] = b[i];
             }
         }
-        pl.lu.solve(y, y);
+        if (!pl.update.solve(nz, y)) {
+            if (!pl.lu.factor(nz)) {
+                pl.update.forget();
+                return null;
+            }
+            pl.update.factored(nz);
+            pl.lu.solve(y, y);
+        }
         double[] out = new double[n];
         for (int i = 0; i < n; i++) {
             if (pl.place[i] >= 0) {
@@ -258,6 +286,7 @@ final class LinearStep implements Jacobian {
         double[] b;
         double[] y;
         SparseLu lu;
+        RowUpdate update;
 
         boolean fits(int[] rows, int[] cols, int count) {
             if (count != rowsSeen.length) {
@@ -271,7 +300,8 @@ final class LinearStep implements Jacobian {
             return true;
         }
 
-        static Plan make(int n, boolean[] eliminable, int[] rows, int[] cols, int count, boolean band) {
+        static Plan make(int n, boolean[] eliminable, boolean[] delayed, int[] rows, int[] cols, int count,
+                         boolean band) {
             Plan p = new Plan();
             p.rowsSeen = Arrays.copyOf(rows, count);
             p.colsSeen = Arrays.copyOf(cols, count);
@@ -356,8 +386,14 @@ final class LinearStep implements Jacobian {
                     }
                 }
             }
+            boolean[] keptDelayed = new boolean[m];
+            for (int i = 0; i < n; i++) {
+                if (kept[i] >= 0) {
+                    keptDelayed[kept[i]] = delayed[i];
+                }
+            }
             int[] perm = band ? Ordering.reverseCuthillMcKee(m, pr, pc, total)
-                    : Ordering.minimumDegree(m, pr, pc, total);
+                    : Ordering.minimumDegree(m, pr, pc, total, keptDelayed);
             int[] inverse = new int[m];
             for (int i = 0; i < m; i++) {
                 inverse[perm[i]] = i;
@@ -406,6 +442,7 @@ final class LinearStep implements Jacobian {
             for (int q = 0; q < fills; q++) {
                 p.fill[q] = Arrays.binarySearch(uniq, keys[keptEntries + q]);
             }
+            p.update = new RowUpdate(p);
             return p;
         }
     }
@@ -455,5 +492,225 @@ final class LinearStep implements Jacobian {
             }
         }
         return true;
+    }
+
+    /**
+     * Solves with a matrix that differs from the factorised one in a few rows only, as after complementarity
+     * rows change sides within one Newton step, without factorising again: with F the factorised matrix and
+     * A = F + U·Dᵀ (U the unit columns of the changed rows, Dᵀ their differences), the Sherman–Morrison–
+     * Woodbury identity gives A⁻¹y = z − Z·(I + Dᵀ·Z)⁻¹·Dᵀ·z with z = F⁻¹y and Z = F⁻¹U (Golub & Van Loan,
+     * Matrix Computations, §2.1.4). The columns of Z are kept while F stays the same. The answer is checked
+     * by its residual; when it is not good, or too many rows changed, the caller factorises instead.
+     */
+    static final class RowUpdate {
+        /** Most changed rows taken this way; beyond it a refactorisation is cheaper. */
+        static final int MAX_ROWS = 24;
+
+        private final Plan plan;
+        private final int m;
+        private final int[] colOf;
+        private double[] factored;
+        private final int[] slotOf;
+        private final double[][] columns = new double[MAX_ROWS][];
+        private final int[] rowOfSlot = new int[MAX_ROWS];
+        private int slots;
+        private final boolean[] changed;
+        private final int[] changedRows = new int[MAX_ROWS];
+        private final double[] work;
+
+        RowUpdate(Plan plan) {
+            this.plan = plan;
+            this.m = plan.m;
+            int nnz = plan.colPtr[m];
+            this.colOf = new int[nnz];
+            for (int c = 0; c < m; c++) {
+                for (int p = plan.colPtr[c]; p < plan.colPtr[c + 1]; p++) {
+                    colOf[p] = c;
+                }
+            }
+            this.slotOf = new int[m];
+            Arrays.fill(slotOf, -1);
+            this.changed = new boolean[m];
+            this.work = new double[m];
+        }
+
+        /** Records the values just factorised. */
+        void factored(double[] values) {
+            if (factored == null) {
+                factored = new double[values.length];
+            }
+            System.arraycopy(values, 0, factored, 0, values.length);
+            forgetColumns();
+        }
+
+        /** No factorisation to build on. */
+        void forget() {
+            factored = null;
+            forgetColumns();
+        }
+
+        private void forgetColumns() {
+            for (int k = 0; k < slots; k++) {
+                slotOf[rowOfSlot[k]] = -1;
+            }
+            slots = 0;
+        }
+
+        /** Solves A·y = y in place when A differs from the factorised matrix in a few rows; false otherwise. */
+        boolean solve(double[] values, double[] y) {
+            if (factored == null) {
+                return false;
+            }
+            int[] rowIdx = plan.rowIdx;
+            int k = 0;
+            boolean same = true;
+            for (int p = 0; p < values.length; p++) {
+                if (values[p] != factored[p]) {
+                    same = false;
+                    int r = rowIdx[p];
+                    if (!changed[r]) {
+                        if (k == MAX_ROWS) {
+                            clearChanged(k);
+                            return false;
+                        }
+                        changed[r] = true;
+                        changedRows[k++] = r;
+                    }
+                }
+            }
+            if (same) {
+                plan.lu.solve(y, y);
+                return true;
+            }
+            double[] rhs = work;
+            System.arraycopy(y, 0, rhs, 0, m);
+            // Z = F⁻¹·U for the changed rows, kept while F stays
+            double[][] z = new double[k][];
+            for (int i = 0; i < k; i++) {
+                int r = changedRows[i];
+                int slot = slotOf[r];
+                if (slot < 0) {
+                    if (slots == MAX_ROWS) {
+                        forgetColumns();
+                        clearChanged(k);
+                        return false;
+                    }
+                    double[] col = new double[m];
+                    col[r] = 1;
+                    plan.lu.solve(col, col);
+                    slot = slots++;
+                    columns[slot] = col;
+                    rowOfSlot[slot] = r;
+                    slotOf[r] = slot;
+                }
+                z[i] = columns[slot];
+            }
+            plan.lu.solve(y, y);
+            // S = I + Dᵀ·Z and Dᵀ·z, from the differences of the changed rows
+            double[][] sm = new double[k][k + 1];
+            for (int i = 0; i < k; i++) {
+                sm[i][i] = 1;
+            }
+            int[] index = new int[m];
+            for (int i = 0; i < k; i++) {
+                index[changedRows[i]] = i;
+            }
+            for (int p = 0; p < values.length; p++) {
+                double d = values[p] - factored[p];
+                if (d != 0) {
+                    int i = index[rowIdx[p]];
+                    int c = colOf[p];
+                    for (int j = 0; j < k; j++) {
+                        sm[i][j] += d * z[j][c];
+                    }
+                    sm[i][k] += d * y[c];
+                }
+            }
+            clearChanged(k);
+            double[] w = Dense.solveInPlace(sm, k);
+            if (w == null) {
+                System.arraycopy(rhs, 0, y, 0, m);
+                return false;
+            }
+            for (int j = 0; j < k; j++) {
+                double wj = w[j];
+                double[] zj = z[j];
+                for (int c = 0; c < m; c++) {
+                    y[c] -= zj[c] * wj;
+                }
+            }
+            // residual of A·y = rhs; a poor answer is left to a fresh factorisation
+            double[] res = new double[m];
+            double norm = 0;
+            for (int c = 0; c < m; c++) {
+                for (int p = plan.colPtr[c]; p < plan.colPtr[c + 1]; p++) {
+                    res[rowIdx[p]] += values[p] * y[c];
+                    norm = Math.max(norm, Math.abs(values[p] * y[c]));
+                }
+            }
+            double worst = 0;
+            for (int r = 0; r < m; r++) {
+                worst = Math.max(worst, Math.abs(res[r] - rhs[r]));
+                norm = Math.max(norm, Math.abs(rhs[r]));
+            }
+            if (!(worst <= 1e-10 * norm)) {
+                System.arraycopy(rhs, 0, y, 0, m);
+                return false;
+            }
+            return true;
+        }
+
+        private void clearChanged(int k) {
+            for (int i = 0; i < k; i++) {
+                changed[changedRows[i]] = false;
+            }
+        }
+    }
+
+    /** Gaussian elimination with partial pivoting on a small dense augmented matrix. */
+    static final class Dense {
+        private Dense() {
+        }
+
+        /** Solves a[0..k)[0..k)·w = a[·][k]; null when a pivot is not clearly non-zero. */
+        static double[] solveInPlace(double[][] a, int k) {
+            double scale = 0;
+            for (int i = 0; i < k; i++) {
+                for (int j = 0; j < k; j++) {
+                    scale = Math.max(scale, Math.abs(a[i][j]));
+                }
+            }
+            for (int c = 0; c < k; c++) {
+                int best = c;
+                for (int r = c + 1; r < k; r++) {
+                    if (Math.abs(a[r][c]) > Math.abs(a[best][c])) {
+                        best = r;
+                    }
+                }
+                if (!(Math.abs(a[best][c]) > 1e-12 * scale)) {
+                    return null;
+                }
+                double[] t = a[c];
+                a[c] = a[best];
+                a[best] = t;
+                for (int r = c + 1; r < k; r++) {
+                    double f = a[r][c] / a[c][c];
+                    if (f != 0) {
+                        for (int j = c; j <= k; j++) {
+                            a[r][j] -= f * a[c][j];
+                        }
+                    }
+                }
+            }
+            double[] w = new double[k];
+            for (int r = k - 1; r >= 0; r--) {
+                double sum = a[r][k];
+                for (int j = r + 1; j < k; j++) {
+                    sum -= a[r][j] * w[j];
+                }
+                w[r] = sum / a[r][r];
+            }
+            return w;
+        }
     }
 }

@@ -192,8 +192,7 @@ public final class Newton {
                 // the sides just chosen make the matrix singular (say a relief opening while a load breaks
                 // away on the same node): go back, and change only the worst row from there
                 s.undoSwitch();
-                lin.clear();
-                s.evaluate(x, f, lin);
+                restamp(s, x, f, lin);
                 if (onlyWorst) {
                     return last;
                 }
@@ -211,6 +210,13 @@ public final class Newton {
             if (s.switchSides(dx, onlyWorst) == 0) {
                 return y;
             }
+            restamp(s, x, f, lin);
+        }
+    }
+
+    /** Puts the Jacobian rows of the sides now in force into lin: in place when the system can, else anew. */
+    private static void restamp(NonlinearSystem s, double[] x, double[] f, LinearStep lin) {
+        if (!s.restampSides(lin)) {
             lin.clear();
             s.evaluate(x, f, lin);
         }

@@ -31,6 +31,11 @@ public interface NonlinearSystem {
         return false;
     }
 
+    /** True when row i is a complementarity row, whose Jacobian row changes with its side. */
+    default boolean switchesSides(int i) {
+        return false;
+    }
+
     /** Called at the start of every Newton run: complementarity rows choose their sides afresh. */
     default void beginRun() {
     }
@@ -50,6 +55,14 @@ public interface NonlinearSystem {
      */
     default int switchSides(double[] dx, boolean onlyWorst) {
         return 0;
+    }
+
+    /**
+     * Rewrites, in j, the Jacobian rows of the complementarity rows for the sides now in force, at the
+     * point last evaluated into j; returns false when it cannot (then evaluate again).
+     */
+    default boolean restampSides(Jacobian j) {
+        return false;
     }
 
     /** Puts back the sides as they were before the last {@link #switchSides}. */

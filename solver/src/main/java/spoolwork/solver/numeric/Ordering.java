@@ -82,6 +82,16 @@ final class Ordering {
      * elimination fills little, as in circuit matrices.
      */
     static int[] minimumDegree(int n, int[] rows, int[] cols, int count) {
+        return minimumDegree(n, rows, cols, count, null);
+    }
+
+    /**
+     * Minimum degree where each node marked in {@code delayed} may only be numbered after one of its
+     * neighbours. The solver delays the unknowns of complementarity rows: such a row holds only its own
+     * unknown on one side and may lack it on the other, but once a neighbouring pressure is eliminated its
+     * diagonal is non-zero on both sides, so one pivot order serves whichever side the row is on.
+     */
+    static int[] minimumDegree(int n, int[] rows, int[] cols, int count, boolean[] delayed) {
         int[] len = new int[n];
         for (int k = 0; k < count; k++) {
             int r = rows[k];
@@ -129,15 +139,32 @@ final class Ordering {
         int[] prevInBucket = new int[n];
         int[] degree = new int[n];
         Arrays.fill(head, -1);
+        boolean[] waiting = new boolean[n];
         for (int i = n - 1; i >= 0; i--) {
             degree[i] = len[i];
-            insert(head, nextInBucket, prevInBucket, i, degree[i]);
+            if (delayed != null && delayed[i] && len[i] > 0) {
+                waiting[i] = true;
+            } else {
+                insert(head, nextInBucket, prevInBucket, i, degree[i]);
+            }
         }
         int[] perm = new int[n];
         int minDegree = 0;
         for (int k = 0; k < n; k++) {
-            while (head[minDegree] < 0) {
+            while (minDegree < n && head[minDegree] < 0) {
                 minDegree++;
+            }
+            if (minDegree == n) {
+                // only delayed nodes are left (their neighbours too are all delayed): release them
+                for (int i = 0; i < n; i++) {
+                    if (waiting[i]) {
+                        waiting[i] = false;
+                        insert(head, nextInBucket, prevInBucket, i, degree[i]);
+                    }
+                }
+                minDegree = 0;
+                k--;
+                continue;
             }
             int v = head[minDegree];
             remove(head, nextInBucket, prevInBucket, v, degree[v]);
@@ -169,7 +196,12 @@ final class Ordering {
                     }
                 }
                 len[u] = lu;
-                if (lu != degree[u]) {
+                if (waiting[u]) {
+                    waiting[u] = false;
+                    degree[u] = lu;
+                    insert(head, nextInBucket, prevInBucket, u, lu);
+                    minDegree = Math.min(minDegree, lu);
+                } else if (lu != degree[u]) {
                     remove(head, nextInBucket, prevInBucket, u, degree[u]);
                     degree[u] = lu;
                     insert(head, nextInBucket, prevInBucket, u, lu);
