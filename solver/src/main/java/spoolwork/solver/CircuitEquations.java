@@ -1,10 +1,12 @@
 package spoolwork.solver;
 
+import java.util.AbstractMap;
 import java.util.ArrayList;
-import java.util.HashMap;
+import java.util.Collections;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Set;
 
 import spoolwork.model.ActuatorState;
 import spoolwork.model.Circuit;
@@ -14,7 +16,6 @@ import spoolwork.model.Endpoint;
 import spoolwork.model.Line;
 import spoolwork.model.LineKind;
 import spoolwork.model.OperatingState;
-import spoolwork.model.PortSpec;
 import spoolwork.model.SpoolPosition;
 import spoolwork.model.netlist.NetNode;
 import spoolwork.model.netlist.Netlist;
@@ -46,8 +47,17 @@ final class CircuitEquations {
     final Netlist netlist;
     final FluidProperties fluid;
     final Network net;
-    /** Node index of every netlist node; −1 for the reservoir. */
-    final Map<NetNode, Integer> nodeOf = new HashMap<>();
+    /** Node index of every netlist node, by the netlist's node number; −1 for the reservoir. */
+    final int[] nodeAt;
+    /** Node index of every netlist node; −1 for the reservoir (a view of {@link #nodeAt}). */
+    final Map<NetNode, Integer> nodeOf;
+    /** Per line in drawing order: the netlist node numbers of its ends (−1 for a shaft coupling). */
+    final int[] lineStart;
+    final int[] lineEnd;
+    /** Per line in drawing order: its loss-bearing element, null for an ideal line or a shaft. */
+    final Branch[] lineBranch;
+    /** Elements of each component, in drawing order. */
+    final List<List<Element>> componentElements;
     /** Representative names of node indices. */
     final List<String> nodeNames = new ArrayList<>();
     /** Elements of each component id. */
@@ -64,10 +74,17 @@ final class CircuitEquations {
         this.state = state;
         this.netlist = netlist;
         this.fluid = new FluidProperties(circuit.fluid());
+        this.nodeAt = new int[netlist.nodeCount()];
+        this.nodeOf = new NodeView();
+        int lineCount = circuit.lines().size();
+        this.lineStart = new int[lineCount];
+        this.lineEnd = new int[lineCount];
+        this.lineBranch = new Branch[lineCount];
+        this.componentElements = new ArrayList<>(circuit.components().size());
         double pRef = 1e6;
         double qRef = 0;
         for (Component c : circuit.components()) {
-            for (String k : List.of("cracking_pressure", "setting", "compensator_setting")) {
+            for (String k : SETTINGS) {
                 if (c.type().params().containsKey(k) && c.type() != ComponentType.CHECK_VALVE
                         && c.type() != ComponentType.PILOT_CHECK_VALVE) {
                     pRef = Math.max(pRef, c.param(k));
@@ -87,14 +104,25 @@ final class CircuitEquations {
         }
         nodes = new NodeConductance(all, nodeNames.toArray(new String[0]));
         net.addElement(nodes);
+        int li = -1;
         for (Line l : circuit.lines()) {
-            if (l.kind() == LineKind.SHAFT || l.ideal()) {
+            li++;
+            if (l.kind() == LineKind.SHAFT) {
+                lineStart[li] = -1;
+                lineEnd[li] = -1;
+                continue;
+            }
+            lineStart[li] = netlist.indexOf(l.from());
+            lineEnd[li] = netlist.indexOf(l.to());
+            if (l.ideal()) {
                 continue;
             }
             LineLaw law = new LineLaw(l.diameter(), l.length(), fluid.density(), fluid.kinematicViscosity(),
                     options.roughness());
-            Branch b = new Branch(l.id(), node(l.from()), null, node(l.to()), null, law, PowerKind.LINE, net);
+            Branch b = new Branch(l.id(), nodeAt[lineStart[li]], null, nodeAt[lineEnd[li]], null, law, PowerKind.LINE,
+                    net);
             net.addElement(b);
+            lineBranch[li] = b;
             lineBranches.put(l.id(), b);
             lineLaws.put(l.id(), law);
         }
@@ -103,6 +131,7 @@ final class CircuitEquations {
             build(c, es);
             es.forEach(net::addElement);
             elementsOf.put(c.id(), es);
+            componentElements.add(es);
         }
     }
 
@@ -115,14 +144,17 @@ final class CircuitEquations {
         return pump.param("speed");
     }
 
+    private static final List<String> SETTINGS = List.of("cracking_pressure", "setting", "compensator_setting");
+
     private void numberNodes() {
-        Map<NetNode, NetNode> parent = new HashMap<>();
-        for (NetNode n : netlist.graph().vertexSet()) {
-            parent.put(n, n);
+        int count = netlist.nodeCount();
+        int[] parent = new int[count];
+        for (int i = 0; i < count; i++) {
+            parent[i] = i;
         }
-        NetNode ground = null;
-        for (NetNode.Port r : netlist.reservoirPorts()) {
-            if (ground == null) {
+        int ground = -1;
+        for (int r : netlist.reservoirNodes()) {
+            if (ground < 0) {
                 ground = r;
             } else {
                 union(parent, ground, r);
@@ -130,83 +162,103 @@ final class CircuitEquations {
         }
         for (Line l : circuit.lines()) {
             if (l.kind() != LineKind.SHAFT && l.ideal()) {
-                union(parent, Netlist.node(l.from()), Netlist.node(l.to()));
+                union(parent, netlist.indexOf(l.from()), netlist.indexOf(l.to()));
             }
         }
-        NetNode groundRoot = ground == null ? null : find(parent, ground);
-        Map<NetNode, Integer> index = new HashMap<>();
-        // number along the drawing: component ports in order, then junctions
-        List<NetNode> order = new ArrayList<>();
-        for (Component c : circuit.components()) {
-            for (PortSpec p : c.type().ports()) {
-                if (!p.mechanical()) {
-                    order.add(new NetNode.Port(c.id(), p.name()));
-                }
-            }
-        }
-        circuit.junctions().forEach(j -> order.add(new NetNode.Junction(j.id())));
-        for (NetNode n : order) {
-            NetNode root = find(parent, n);
-            if (root.equals(groundRoot)) {
-                nodeOf.put(n, -1);
+        int groundRoot = ground < 0 ? -1 : find(parent, ground);
+        int[] index = new int[count];
+        java.util.Arrays.fill(index, -1);
+        // number along the drawing (the netlist's node order): component ports in order, then junctions
+        for (int n = 0; n < count; n++) {
+            int root = find(parent, n);
+            if (root == groundRoot) {
+                nodeAt[n] = -1;
                 continue;
             }
-            Integer i = index.get(root);
-            if (i == null) {
-                i = net.addNode(describe(n));
-                index.put(root, i);
-                nodeNames.add(describe(n));
+            int i = index[root];
+            if (i < 0) {
+                String name = describe(n);
+                i = net.addNode(name);
+                index[root] = i;
+                nodeNames.add(name);
             }
-            nodeOf.put(n, i);
+            nodeAt[n] = i;
         }
     }
 
-    String describe(NetNode n) {
-        if (n instanceof NetNode.Port p) {
-            return circuit.component(p.componentId()).map(Component::tag).orElse(p.componentId()) + "." + p.port();
+    private String describe(int n) {
+        Component owner = netlist.componentAt(n);
+        if (owner == null) {
+            return ((NetNode.Junction) netlist.node(n)).junctionId();
         }
-        return ((NetNode.Junction) n).junctionId();
+        return owner.tag() + "." + ((NetNode.Port) netlist.node(n)).port();
     }
 
-    private static NetNode find(Map<NetNode, NetNode> parent, NetNode n) {
-        NetNode r = n;
-        while (!parent.get(r).equals(r)) {
-            r = parent.get(r);
+    private static int find(int[] parent, int n) {
+        int r = n;
+        while (parent[r] != r) {
+            r = parent[r];
         }
-        NetNode c = n;
-        while (!parent.get(c).equals(r)) {
-            NetNode next = parent.get(c);
-            parent.put(c, r);
+        int c = n;
+        while (parent[c] != r) {
+            int next = parent[c];
+            parent[c] = r;
             c = next;
         }
         return r;
     }
 
-    private static void union(Map<NetNode, NetNode> parent, NetNode a, NetNode b) {
-        NetNode ra = find(parent, a);
-        NetNode rb = find(parent, b);
-        if (!ra.equals(rb)) {
-            parent.put(rb, ra);
+    private static void union(int[] parent, int a, int b) {
+        int ra = find(parent, a);
+        int rb = find(parent, b);
+        if (ra != rb) {
+            parent[rb] = ra;
+        }
+    }
+
+    /** Read-only map view of the node numbering, keyed by netlist node. */
+    private final class NodeView extends AbstractMap<NetNode, Integer> {
+        @Override
+        public Integer get(Object key) {
+            int i = key instanceof NetNode n ? netlist.indexOf(n) : -1;
+            return i < 0 ? null : nodeAt[i];
+        }
+
+        @Override
+        public boolean containsKey(Object key) {
+            return key instanceof NetNode n && netlist.indexOf(n) >= 0;
+        }
+
+        @Override
+        public int size() {
+            return nodeAt.length;
+        }
+
+        @Override
+        public Set<Map.Entry<NetNode, Integer>> entrySet() {
+            Map<NetNode, Integer> m = new LinkedHashMap<>();
+            for (int i = 0; i < nodeAt.length; i++) {
+                m.put(netlist.node(i), nodeAt[i]);
+            }
+            return Collections.unmodifiableMap(m).entrySet();
         }
     }
 
     int node(Endpoint e) {
-        return nodeOf.get(Netlist.node(e));
+        return nodeAt[netlist.indexOf(e)];
     }
 
     int node(Component c, String port) {
-        return nodeOf.get(new NetNode.Port(c.id(), port));
+        int i = netlist.portIndex(c.id(), port);
+        if (i < 0) {
+            throw new NullPointerException(c.tag() + " has no hydraulic port " + port);
+        }
+        return nodeAt[i];
     }
 
     private boolean connected(Component c, String port) {
-        for (Line l : circuit.linesAt(c.id())) {
-            for (Endpoint e : List.of(l.from(), l.to())) {
-                if (e instanceof Endpoint.PortRef p && p.componentId().equals(c.id()) && p.port().equals(port)) {
-                    return true;
-                }
-            }
-        }
-        return false;
+        int i = netlist.portIndex(c.id(), port);
+        return i >= 0 && netlist.lineDegree(i) > 0;
     }
 
     private void build(Component c, List<Element> es) {

@@ -1,7 +1,5 @@
 package spoolwork.solver;
 
-import java.util.Collections;
-import java.util.LinkedHashMap;
 import java.util.Map;
 import java.util.Optional;
 
@@ -17,8 +15,8 @@ import spoolwork.model.ComponentType;
 public record ComponentResult(String id, String tag, ComponentType type, Map<String, PortResult> ports,
                               Map<String, Double> values) {
     public ComponentResult {
-        ports = Collections.unmodifiableMap(new LinkedHashMap<>(ports));
-        values = Collections.unmodifiableMap(new LinkedHashMap<>(values));
+        ports = Frozen.copyOf(ports);
+        values = Frozen.copyOf(values);
     }
 
     public Optional<Double> value(String key) {

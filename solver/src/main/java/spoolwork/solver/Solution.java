@@ -1,7 +1,5 @@
 package spoolwork.solver;
 
-import java.util.Collections;
-import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
@@ -19,8 +17,8 @@ public record Solution(String state, boolean converged, int iterations, List<Dia
                        Map<String, ComponentResult> components, Map<String, LineResult> lines, PowerBalance power) {
     public Solution {
         diagnostics = List.copyOf(diagnostics);
-        components = Collections.unmodifiableMap(new LinkedHashMap<>(components));
-        lines = Collections.unmodifiableMap(new LinkedHashMap<>(lines));
+        components = Frozen.copyOf(components);
+        lines = Frozen.copyOf(lines);
     }
 
     static Solution failed(String state, int iterations, List<Diagnostic> diagnostics) {

@@ -14,7 +14,6 @@ import spoolwork.model.Line;
 import spoolwork.model.LineKind;
 import spoolwork.model.OperatingState;
 import spoolwork.model.PortSpec;
-import spoolwork.model.netlist.NetNode;
 import spoolwork.model.netlist.Netlist;
 import spoolwork.solver.elements.Element;
 import spoolwork.solver.elements.Network;
@@ -181,50 +180,57 @@ public final class SteadyStateSolver {
                 + ". Check settings and loads near the elements named", where);
     }
 
+    private static int capacity(int entries) {
+        return (int) (entries / 0.75f) + 1;
+    }
+
     private Solution results(CircuitEquations eq, OperatingState state, double[] x, int iterations,
                              List<Diagnostic> diagnostics) {
         Circuit circuit = eq.circuit;
         Network net = eq.net;
-        EnumMap<PowerKind, Double> power = new EnumMap<>(PowerKind.class);
-        for (PowerKind k : PowerKind.values()) {
-            power.put(k, 0.0);
-        }
+        // absorbed power by kind, summed in the same order as the reports come
+        double[] power = new double[PowerKind.values().length];
         Report nodeReport = new Report();
         eq.nodes.report(x, net, nodeReport);
         for (Element b : eq.lineBranches.values()) {
             b.report(x, net, nodeReport);
         }
-        nodeReport.power.forEach((k, v) -> power.merge(k, v, Double::sum));
-        Map<String, ComponentResult> comps = new LinkedHashMap<>();
-        Map<NetNode, Double> portFlowInto = new HashMap<>();
+        nodeReport.power.forEach((k, v) -> power[k.ordinal()] += v);
+        LinkedHashMap<String, ComponentResult> comps = new LinkedHashMap<>(capacity(circuit.components().size()));
+        // flow into its component at every port, by netlist node number: component ports come first, in
+        // drawing order and port order
+        double[] portFlowInto = new double[eq.netlist.nodeCount()];
+        int node = 0;
+        int ci = 0;
         double pumpInput = 0;
         double pumpHydraulic = 0;
         Map<String, Double> inputByPump = new HashMap<>();
         for (Component c : circuit.components()) {
             Report rep = new Report();
-            for (Element e : eq.elementsOf.get(c.id())) {
+            for (Element e : eq.componentElements.get(ci++)) {
                 e.report(x, net, rep);
             }
-            rep.power.forEach((k, v) -> power.merge(k, v, Double::sum));
-            Map<String, PortResult> ports = new LinkedHashMap<>();
+            rep.power.forEach((k, v) -> power[k.ordinal()] += v);
+            LinkedHashMap<String, PortResult> ports = new LinkedHashMap<>();
             for (PortSpec ps : c.type().ports()) {
                 if (ps.mechanical()) {
                     continue;
                 }
-                NetNode node = new NetNode.Port(c.id(), ps.name());
-                int i = eq.nodeOf.get(node);
+                int i = eq.nodeAt[node];
                 double q = rep.portFlows.getOrDefault(ps.name(), 0.0);
                 ports.put(ps.name(), new PortResult(i < 0 ? 0 : x[i], q));
-                portFlowInto.put(node, q);
+                portFlowInto[node] = q;
+                node++;
             }
-            Map<String, Double> values = new LinkedHashMap<>(rep.values);
+            // the report is this component's alone, so its values become the result's
+            Map<String, Double> values = rep.values;
             extras(c, ports, values, rep);
             if (c.type().isPump()) {
                 pumpInput += values.get("input_power_w");
                 pumpHydraulic += values.get("hydraulic_power_w");
                 inputByPump.put(c.id(), values.get("input_power_w"));
             }
-            comps.put(c.tag(), new ComponentResult(c.id(), c.tag(), c.type(), ports, values));
+            comps.put(c.tag(), new ComponentResult(c.id(), c.tag(), c.type(), Frozen.own(ports), Frozen.own(values)));
         }
         for (Component c : circuit.components()) {
             if (c.type() != ComponentType.PRIME_MOVER) {
@@ -236,7 +242,7 @@ public final class SteadyStateSolver {
                     load += inputByPump.getOrDefault(d.getKey(), 0.0);
                 }
             }
-            Map<String, Double> values = new LinkedHashMap<>(comps.get(c.tag()).values());
+            LinkedHashMap<String, Double> values = new LinkedHashMap<>(comps.get(c.tag()).values());
             double speed = state.speeds().getOrDefault(c.id(), c.param("speed"));
             values.put("speed_rpm", speed * 60);
             values.put("shaft_power_w", load);
@@ -245,19 +251,22 @@ public final class SteadyStateSolver {
             if (speed > 0) {
                 values.put("torque_nm", load / (2 * Math.PI * speed));
             }
-            comps.put(c.tag(), new ComponentResult(c.id(), c.tag(), c.type(), comps.get(c.tag()).ports(), values));
+            comps.put(c.tag(), new ComponentResult(c.id(), c.tag(), c.type(), comps.get(c.tag()).ports(),
+                    Frozen.own(values)));
             if (load > c.param("rated_power")) {
                 diagnostics.add(new Diagnostic(Severity.WARNING, String.format(java.util.Locale.ROOT,
                         "prime mover %s is loaded to %.0f %% of its rating in state %s", c.tag(),
                         100 * load / c.param("rated_power"), state.name()), List.of(c.tag())));
             }
         }
-        Map<String, LineResult> lines = lineResults(eq, x, portFlowInto);
-        reservoirPortFlows(circuit, lines, comps);
+        LineResult[] byLine = new LineResult[eq.lineStart.length];
+        LinkedHashMap<String, LineResult> lines = lineResults(eq, x, portFlowInto, byLine);
+        reservoirPortFlows(eq, byLine, comps);
         double pumpLoss = pumpInput - pumpHydraulic;
-        PowerBalance balance = new PowerBalance(pumpInput, pumpHydraulic, power.get(PowerKind.USEFUL),
-                power.get(PowerKind.RELIEF), power.get(PowerKind.THROTTLE), power.get(PowerKind.LINE),
-                power.get(PowerKind.LEAKAGE), power.get(PowerKind.VALVE), power.get(PowerKind.ACTUATOR), pumpLoss);
+        PowerBalance balance = new PowerBalance(pumpInput, pumpHydraulic, power[PowerKind.USEFUL.ordinal()],
+                power[PowerKind.RELIEF.ordinal()], power[PowerKind.THROTTLE.ordinal()],
+                power[PowerKind.LINE.ordinal()], power[PowerKind.LEAKAGE.ordinal()], power[PowerKind.VALVE.ordinal()],
+                power[PowerKind.ACTUATOR.ordinal()], pumpLoss);
         for (Map.Entry<String, ComponentResult> e : comps.entrySet()) {
             Double abs = e.getValue().values().get("inlet_pressure_abs_pa");
             if (abs != null && abs < 0.8e5) {
@@ -266,7 +275,8 @@ public final class SteadyStateSolver {
                         e.getKey(), abs / 1e5), List.of(e.getKey())));
             }
         }
-        return new Solution(state.name(), true, iterations, diagnostics, comps, lines, balance);
+        return new Solution(state.name(), true, iterations, diagnostics, Frozen.own(comps), Frozen.own(lines),
+                balance);
     }
 
     private void extras(Component c, Map<String, PortResult> ports, Map<String, Double> values, Report rep) {
@@ -315,52 +325,58 @@ public final class SteadyStateSolver {
      * A reservoir has no element law (its ports are the reference pressure), so the flow into each of its
      * ports is what its lines carry to it: a line's flow counts positive towards its end.
      */
-    private static void reservoirPortFlows(Circuit circuit, Map<String, LineResult> lines,
+    private static void reservoirPortFlows(CircuitEquations eq, LineResult[] byLine,
                                            Map<String, ComponentResult> comps) {
-        for (Component c : circuit.components()) {
+        for (Component c : eq.circuit.components()) {
             if (c.type() != ComponentType.RESERVOIR) {
                 continue;
             }
             ComponentResult r = comps.get(c.tag());
-            Map<String, PortResult> ports = new LinkedHashMap<>();
+            LinkedHashMap<String, PortResult> ports = new LinkedHashMap<>();
             for (Map.Entry<String, PortResult> e : r.ports().entrySet()) {
+                int port = eq.netlist.portIndex(c.id(), e.getKey());
                 double in = 0;
-                for (Line l : circuit.linesAt(c.id())) {
-                    LineResult lr = lines.get(l.id());
+                for (int li = 0; li < byLine.length; li++) {
+                    LineResult lr = byLine[li];
                     if (lr == null) {
                         continue;
                     }
-                    if (l.to().equals(spoolwork.model.Endpoint.port(c.id(), e.getKey()))) {
+                    if (eq.lineEnd[li] == port) {
                         in += lr.flow();
                     }
-                    if (l.from().equals(spoolwork.model.Endpoint.port(c.id(), e.getKey()))) {
+                    if (eq.lineStart[li] == port) {
                         in -= lr.flow();
                     }
                 }
                 ports.put(e.getKey(), new PortResult(e.getValue().pressure(), in));
             }
-            comps.put(c.tag(), new ComponentResult(c.id(), c.tag(), c.type(), ports, r.values()));
+            comps.put(c.tag(), new ComponentResult(c.id(), c.tag(), c.type(), Frozen.own(ports), r.values()));
         }
     }
 
-    private Map<String, LineResult> lineResults(CircuitEquations eq, double[] x, Map<NetNode, Double> portFlowInto) {
+    private LinkedHashMap<String, LineResult> lineResults(CircuitEquations eq, double[] x, double[] portFlowInto,
+                                                          LineResult[] byLine) {
         Circuit circuit = eq.circuit;
-        Map<String, Double> idealFlows = IdealLineFlows.compute(eq, x, portFlowInto);
-        Map<String, LineResult> out = new LinkedHashMap<>();
+        double[] idealFlows = IdealLineFlows.compute(eq, x, portFlowInto);
+        LinkedHashMap<String, LineResult> out = new LinkedHashMap<>(capacity(circuit.lines().size()));
         double nu = eq.fluid.kinematicViscosity();
+        int li = -1;
         for (Line l : circuit.lines()) {
+            li++;
             if (l.kind() == LineKind.SHAFT) {
                 continue;
             }
-            int a = eq.node(l.from());
-            int b = eq.node(l.to());
+            int a = eq.nodeAt[eq.lineStart[li]];
+            int b = eq.nodeAt[eq.lineEnd[li]];
             double pa = a < 0 ? 0 : x[a];
             double pb = b < 0 ? 0 : x[b];
-            double q = l.ideal() ? idealFlows.getOrDefault(l.id(), 0.0) : eq.lineBranches.get(l.id()).flow(x);
+            double q = l.ideal() ? idealFlows[li] : eq.lineBranch[li].flow(x);
             double area = Math.PI * l.diameter() * l.diameter() / 4;
             double v = area > 0 ? q / area : 0;
             double re = l.diameter() > 0 ? Math.abs(v) * l.diameter() / nu : 0;
-            out.put(l.id(), new LineResult(l.id(), q, pa, pb, v, re, l.ideal() ? 0 : q * (pa - pb)));
+            LineResult r = new LineResult(l.id(), q, pa, pb, v, re, l.ideal() ? 0 : q * (pa - pb));
+            out.put(l.id(), r);
+            byLine[li] = r;
         }
         return out;
     }

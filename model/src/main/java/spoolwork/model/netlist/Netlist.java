@@ -1,7 +1,9 @@
 package spoolwork.model.netlist;
 
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.Collections;
+import java.util.HashMap;
 import java.util.LinkedHashMap;
 import java.util.LinkedHashSet;
 import java.util.List;
@@ -13,13 +15,16 @@ import org.jgrapht.Graph;
 import org.jgrapht.GraphPath;
 import org.jgrapht.alg.connectivity.ConnectivityInspector;
 import org.jgrapht.alg.shortestpath.BFSShortestPath;
+import org.jgrapht.graph.AbstractBaseGraph;
 import org.jgrapht.graph.AsUnmodifiableGraph;
-import org.jgrapht.graph.Pseudograph;
+import org.jgrapht.graph.DefaultGraphSpecificsStrategy;
+import org.jgrapht.graph.DefaultGraphType;
 
 import spoolwork.model.Circuit;
 import spoolwork.model.Component;
 import spoolwork.model.ComponentType;
 import spoolwork.model.Endpoint;
+import spoolwork.model.Junction;
 import spoolwork.model.Line;
 import spoolwork.model.LineKind;
 import spoolwork.model.OperatingState;
@@ -40,6 +45,19 @@ public final class Netlist {
     private final Graph<NetNode, NetEdge> graph;
     private final Graph<NetNode, NetEdge> lineGraph;
     private final Map<String, String> driverOf;
+    /** Every node, numbered in graph vertex order: component ports in drawing order, then junctions. */
+    private final NetNode[] nodes;
+    /** The component each node is a port of; null for a junction. */
+    private final Component[] ownerOf;
+    /** Number of drawn (non-shaft) lines ending at each node. */
+    private final int[] lineDegree;
+    /** Index of the first port node of each component id, and of each junction id. */
+    private final Map<String, Integer> firstNode;
+    /** Edge ends by node index, in graph edge order. */
+    private final int[] edgeSource;
+    private final int[] edgeTarget;
+    private final NetEdge[] edges;
+    private final int[] reservoirNodes;
 
     /**
      * @param state the operating state whose spool positions set the valves' internal paths; null for all
@@ -47,22 +65,58 @@ public final class Netlist {
      */
     public Netlist(Circuit circuit, OperatingState state) {
         this.circuit = circuit;
-        Graph<NetNode, NetEdge> g = new Pseudograph<>(null, null, false);
-        Graph<NetNode, NetEdge> lg = new Pseudograph<>(null, null, false);
+        int count = 0;
+        int reservoirCount = 0;
         for (Component c : circuit.components()) {
+            for (PortSpec p : c.type().ports()) {
+                if (!p.mechanical()) {
+                    count++;
+                    if (c.type() == ComponentType.RESERVOIR) {
+                        reservoirCount++;
+                    }
+                }
+            }
+        }
+        int portCount = count;
+        count += circuit.junctions().size();
+        nodes = new NetNode[count];
+        ownerOf = new Component[count];
+        lineDegree = new int[count];
+        firstNode = new HashMap<>(capacity(circuit.components().size() + circuit.junctions().size()));
+        reservoirNodes = new int[reservoirCount];
+        Graph<NetNode, NetEdge> g = new NetGraph();
+        Graph<NetNode, NetEdge> lg = new NetGraph();
+        int k = 0;
+        int r = 0;
+        for (Component c : circuit.components()) {
+            firstNode.put(c.id(), k);
             for (PortSpec p : c.type().ports()) {
                 if (!p.mechanical()) {
                     NetNode n = new NetNode.Port(c.id(), p.name());
                     g.addVertex(n);
                     lg.addVertex(n);
+                    if (c.type() == ComponentType.RESERVOIR) {
+                        reservoirNodes[r++] = k;
+                    }
+                    ownerOf[k] = c;
+                    nodes[k++] = n;
                 }
             }
         }
-        circuit.junctions().forEach(j -> {
-            g.addVertex(new NetNode.Junction(j.id()));
-            lg.addVertex(new NetNode.Junction(j.id()));
-        });
+        for (Junction j : circuit.junctions()) {
+            NetNode n = new NetNode.Junction(j.id());
+            g.addVertex(n);
+            lg.addVertex(n);
+            firstNode.put(j.id(), k);
+            nodes[k++] = n;
+        }
+        assert k == portCount + circuit.junctions().size();
         Map<String, String> drivers = new LinkedHashMap<>();
+        int maxEdges = circuit.lines().size() + 3 * circuit.components().size();
+        int[] src = new int[maxEdges];
+        int[] dst = new int[maxEdges];
+        NetEdge[] es = new NetEdge[maxEdges];
+        int m = 0;
         for (Line l : circuit.lines()) {
             if (l.kind() == LineKind.SHAFT) {
                 Component a = circuit.component(l.from().ownerId()).orElseThrow();
@@ -74,20 +128,172 @@ public final class Netlist {
                 }
                 continue;
             }
+            int a = existing(l.from());
+            int b = existing(l.to());
             NetEdge e = new NetEdge.LineEdge(l.id());
-            g.addEdge(node(l.from()), node(l.to()), e);
-            lg.addEdge(node(l.from()), node(l.to()), e);
+            g.addEdge(nodes[a], nodes[b], e);
+            lg.addEdge(nodes[a], nodes[b], e);
+            lineDegree[a]++;
+            lineDegree[b]++;
+            if (m == es.length) {
+                src = Arrays.copyOf(src, 2 * m);
+                dst = Arrays.copyOf(dst, 2 * m);
+                es = Arrays.copyOf(es, 2 * m);
+            }
+            src[m] = a;
+            dst[m] = b;
+            es[m++] = e;
         }
+        // the paths of a directional valve depend on its type, options and spool position only
+        Map<List<Object>, List<List<String>>> valvePaths = new HashMap<>();
         for (Component c : circuit.components()) {
             String position = state == null ? null : state.positionOf(c.id());
-            for (List<String> path : c.type().internalPaths(c.options(), position)) {
-                g.addEdge(new NetNode.Port(c.id(), path.get(0)), new NetNode.Port(c.id(), path.get(1)),
-                        new NetEdge.InternalEdge(c.id(), path.get(0), path.get(1)));
+            List<List<String>> paths = c.type().isDirectionalValve()
+                    ? valvePaths.computeIfAbsent(Arrays.asList(c.type(), c.options(), position),
+                            key -> c.type().internalPaths(c.options(), position))
+                    : c.type().internalPaths(c.options(), position);
+            for (List<String> path : paths) {
+                int a = existingPort(c.id(), path.get(0));
+                int b = existingPort(c.id(), path.get(1));
+                NetEdge e = new NetEdge.InternalEdge(c.id(), path.get(0), path.get(1));
+                g.addEdge(nodes[a], nodes[b], e);
+                if (m == es.length) {
+                    src = Arrays.copyOf(src, 2 * m);
+                    dst = Arrays.copyOf(dst, 2 * m);
+                    es = Arrays.copyOf(es, 2 * m);
+                }
+                src[m] = a;
+                dst[m] = b;
+                es[m++] = e;
             }
         }
+        this.edgeSource = Arrays.copyOf(src, m);
+        this.edgeTarget = Arrays.copyOf(dst, m);
+        this.edges = Arrays.copyOf(es, m);
         this.graph = new AsUnmodifiableGraph<>(g);
         this.lineGraph = new AsUnmodifiableGraph<>(lg);
         this.driverOf = Collections.unmodifiableMap(drivers);
+    }
+
+    /**
+     * A multigraph with JGraphT's plain specifics: the netlist never asks for the edges between two given
+     * nodes, so the lookup table of vertex pairs a {@code Pseudograph} keeps would only cost time.
+     */
+    private static final class NetGraph extends AbstractBaseGraph<NetNode, NetEdge> {
+        private static final long serialVersionUID = 1L;
+
+        NetGraph() {
+            super(null, null, DefaultGraphType.pseudograph(), new DefaultGraphSpecificsStrategy<>());
+        }
+    }
+
+    private static int capacity(int entries) {
+        return (int) (entries / 0.75f) + 1;
+    }
+
+    private int existing(Endpoint e) {
+        int i = indexOf(e);
+        if (i < 0) {
+            throw new IllegalArgumentException("no such vertex in graph: " + node(e));
+        }
+        return i;
+    }
+
+    private int existingPort(String componentId, String port) {
+        int i = portIndex(componentId, port);
+        if (i < 0) {
+            throw new IllegalArgumentException("no such vertex in graph: " + componentId + "." + port);
+        }
+        return i;
+    }
+
+    /** Number of nodes; they are numbered from 0 in the order of {@code graph().vertexSet()}. */
+    public int nodeCount() {
+        return nodes.length;
+    }
+
+    /** The node with the given number. */
+    public NetNode node(int index) {
+        return nodes[index];
+    }
+
+    /** The component whose port the numbered node is; null for a junction. */
+    public Component componentAt(int index) {
+        return ownerOf[index];
+    }
+
+    /** Number of drawn lines (shaft couplings excluded) ending at the numbered node. */
+    public int lineDegree(int index) {
+        return lineDegree[index];
+    }
+
+    /** The number of a component's hydraulic port, or −1 when there is no such hydraulic port. */
+    public int portIndex(String componentId, String port) {
+        Integer first = firstNode.get(componentId);
+        if (first == null) {
+            return -1;
+        }
+        int i = first;
+        Component c = ownerOf.length > i ? ownerOf[i] : null;
+        if (c == null || !c.id().equals(componentId)) {
+            return -1;
+        }
+        for (PortSpec p : c.type().ports()) {
+            if (p.mechanical()) {
+                continue;
+            }
+            if (p.name().equals(port)) {
+                return i;
+            }
+            i++;
+        }
+        return -1;
+    }
+
+    /** The number of the node a line endpoint sits on, or −1 when the netlist has no such node. */
+    public int indexOf(Endpoint e) {
+        if (e instanceof Endpoint.PortRef p) {
+            return portIndex(p.componentId(), p.port());
+        }
+        return junctionIndex(((Endpoint.JunctionRef) e).junctionId());
+    }
+
+    /** The number of a node, or −1 when it is not in the netlist. */
+    public int indexOf(NetNode n) {
+        if (n instanceof NetNode.Port p) {
+            return portIndex(p.componentId(), p.port());
+        }
+        return junctionIndex(((NetNode.Junction) n).junctionId());
+    }
+
+    private int junctionIndex(String id) {
+        Integer i = firstNode.get(id);
+        return i == null || !(nodes[i] instanceof NetNode.Junction j) || !j.junctionId().equals(id) ? -1 : i;
+    }
+
+    /** Number of edges; they are numbered from 0 in the order of {@code graph().edgeSet()}. */
+    public int edgeCount() {
+        return edges.length;
+    }
+
+    /** The numbered edge. */
+    public NetEdge edge(int index) {
+        return edges[index];
+    }
+
+    /** The number of the node the numbered edge starts at. */
+    public int edgeSource(int index) {
+        return edgeSource[index];
+    }
+
+    /** The number of the node the numbered edge ends at. */
+    public int edgeTarget(int index) {
+        return edgeTarget[index];
+    }
+
+    /** The numbers of the reservoir ports, in the order of {@link #reservoirPorts()}. */
+    public int[] reservoirNodes() {
+        return reservoirNodes.clone();
     }
 
     /** The node a line endpoint sits on. */
@@ -110,8 +316,8 @@ public final class Netlist {
     /** Hydraulic ports with no line attached, in drawing order. */
     public List<NetNode.Port> unconnectedPorts() {
         List<NetNode.Port> out = new ArrayList<>();
-        for (NetNode n : lineGraph.vertexSet()) {
-            if (n instanceof NetNode.Port p && lineGraph.degreeOf(n) == 0) {
+        for (int i = 0; i < nodes.length; i++) {
+            if (nodes[i] instanceof NetNode.Port p && lineDegree[i] == 0) {
                 out.add(p);
             }
         }
@@ -143,13 +349,9 @@ public final class Netlist {
 
     /** The reservoir ports, which sit at the reference (zero gauge) pressure. */
     public List<NetNode.Port> reservoirPorts() {
-        List<NetNode.Port> out = new ArrayList<>();
-        for (Component c : circuit.components()) {
-            if (c.type() == ComponentType.RESERVOIR) {
-                for (PortSpec p : c.type().ports()) {
-                    out.add(new NetNode.Port(c.id(), p.name()));
-                }
-            }
+        List<NetNode.Port> out = new ArrayList<>(reservoirNodes.length);
+        for (int i : reservoirNodes) {
+            out.add((NetNode.Port) nodes[i]);
         }
         return out;
     }

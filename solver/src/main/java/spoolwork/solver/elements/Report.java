@@ -14,14 +14,17 @@ public final class Report {
     public final EnumMap<PowerKind, Double> power = new EnumMap<>(PowerKind.class);
 
     public void flow(String port, double q) {
-        portFlows.merge(port, q, Double::sum);
+        Double old = portFlows.get(port);
+        portFlows.put(port, old == null ? q : old + q);
     }
 
     public void value(String key, double v) {
-        values.merge(key, v, Double::sum);
+        Double old = values.get(key);
+        values.put(key, old == null ? v : old + v);
     }
 
     public void power(PowerKind kind, double w) {
-        power.merge(kind, w, Double::sum);
+        Double old = power.get(kind);
+        power.put(kind, old == null ? w : old + w);
     }
 }

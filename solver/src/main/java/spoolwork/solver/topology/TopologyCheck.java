@@ -2,15 +2,11 @@ package spoolwork.solver.topology;
 
 import java.util.ArrayList;
 import java.util.Arrays;
-import java.util.HashMap;
-import java.util.HashSet;
 import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
 import java.util.TreeMap;
-
-import org.jgrapht.Graph;
 
 import spoolwork.model.ActuatorState;
 import spoolwork.model.Circuit;
@@ -39,38 +35,30 @@ public final class TopologyCheck {
         this.circuit = circuit;
         this.state = state;
         this.netlist = netlist;
-        Map<String, ComponentType> typeOf = new HashMap<>();
-        for (Component c : circuit.components()) {
-            typeOf.put(c.id(), c.type());
-        }
-        // a compact copy of the graph, numbered in its vertex order, so that each traversal below is a
+        // a compact copy of the graph, numbered like the netlist's nodes, so that each traversal below is a
         // plain walk over int arrays
-        Graph<NetNode, NetEdge> g = netlist.graph();
-        int n = g.vertexSet().size();
-        nodes = g.vertexSet().toArray(new NetNode[0]);
+        int n = netlist.nodeCount();
+        nodes = new NetNode[n];
         nodeType = new ComponentType[n];
         for (int i = 0; i < n; i++) {
-            index.put(nodes[i], i);
-            if (nodes[i] instanceof NetNode.Port p) {
-                nodeType[i] = typeOf.get(p.componentId());
-            }
+            nodes[i] = netlist.node(i);
+            Component owner = netlist.componentAt(i);
+            nodeType[i] = owner == null ? null : owner.type();
         }
-        int m = g.edgeSet().size();
+        int m = netlist.edgeCount();
         int[] from = new int[m];
         int[] to = new int[m];
         byte[] kind = new byte[m];
         int[] degree = new int[n + 1];
-        int k = 0;
-        for (NetEdge e : g.edgeSet()) {
-            from[k] = index.get(g.getEdgeSource(e));
-            to[k] = index.get(g.getEdgeTarget(e));
-            if (e instanceof NetEdge.InternalEdge ie) {
-                ComponentType t = typeOf.get(ie.componentId());
+        for (int k = 0; k < m; k++) {
+            from[k] = netlist.edgeSource(k);
+            to[k] = netlist.edgeTarget(k);
+            if (netlist.edge(k) instanceof NetEdge.InternalEdge) {
+                ComponentType t = nodeType[from[k]];
                 kind[k] = t.isPump() ? PUMP_PATH : t == ComponentType.HYDRAULIC_MOTOR ? MOTOR_PATH : OTHER;
             }
             degree[from[k] + 1]++;
             degree[to[k] + 1]++;
-            k++;
         }
         for (int i = 0; i < n; i++) {
             degree[i + 1] += degree[i];
@@ -91,7 +79,6 @@ public final class TopologyCheck {
     private static final byte PUMP_PATH = 1;
     private static final byte MOTOR_PATH = 2;
 
-    private final Map<NetNode, Integer> index = new HashMap<>();
     private final NetNode[] nodes;
     /** Type of the component each node is a port of; null for a junction. */
     private final ComponentType[] nodeType;
@@ -142,19 +129,27 @@ public final class TopologyCheck {
     private void floating(List<Diagnostic> out) {
         int[] label = labels(false, false);
         boolean[] reached = new boolean[nodes.length];
-        for (NetNode.Port r : netlist.reservoirPorts()) {
-            reached[label[index.get(r)]] = true;
+        for (int r : netlist.reservoirNodes()) {
+            reached[label[r]] = true;
         }
-        Set<NetNode> lone = new HashSet<>(netlist.unconnectedPorts());
-        Map<Integer, List<NetNode>> subs = new TreeMap<>();
+        Map<Integer, List<Integer>> subs = new TreeMap<>();
         for (int i = 0; i < nodes.length; i++) {
             if (!reached[label[i]]) {
-                subs.computeIfAbsent(label[i], x -> new ArrayList<>()).add(nodes[i]);
+                subs.computeIfAbsent(label[i], x -> new ArrayList<>()).add(i);
             }
         }
-        for (List<NetNode> sub : subs.values()) {
-            if (lone.containsAll(sub)) {
+        for (List<Integer> members : subs.values()) {
+            // a part made of unconnected ports alone has had its warning already
+            boolean lone = true;
+            for (int i : members) {
+                lone &= nodes[i] instanceof NetNode.Port && netlist.lineDegree(i) == 0;
+            }
+            if (lone) {
                 continue;
+            }
+            List<NetNode> sub = new ArrayList<>(members.size());
+            for (int i : members) {
+                sub.add(nodes[i]);
             }
             Set<String> tags = new LinkedHashSet<>();
             List<String> names = new ArrayList<>();
@@ -224,12 +219,12 @@ public final class TopologyCheck {
     }
 
     /** Labels of the parts that hold a port of one of the given types (and port name, when not null). */
-    private Set<Integer> partsWith(int[] label, Set<ComponentType> types, String port) {
-        Set<Integer> out = new HashSet<>();
+    private boolean[] partsWith(int[] label, Set<ComponentType> types, String port) {
+        boolean[] out = new boolean[nodes.length];
         for (int i = 0; i < nodes.length; i++) {
-            if (nodes[i] instanceof NetNode.Port p && types.contains(nodeType[i])
-                    && (port == null || p.port().equals(port))) {
-                out.add(label[i]);
+            if (nodeType[i] != null && types.contains(nodeType[i])
+                    && (port == null || ((NetNode.Port) nodes[i]).port().equals(port))) {
+                out[label[i]] = true;
             }
         }
         return out;
@@ -237,20 +232,20 @@ public final class TopologyCheck {
 
     private void pumps(List<Diagnostic> out) {
         int[] label = parts(false);
-        Set<Integer> relieved = partsWith(label, Set.of(ComponentType.RELIEF_VALVE), "P");
-        Set<Integer> fed = partsWith(label, Set.of(ComponentType.RESERVOIR), null);
+        boolean[] relieved = partsWith(label, Set.of(ComponentType.RELIEF_VALVE), "P");
+        boolean[] fed = partsWith(label, Set.of(ComponentType.RESERVOIR), null);
         for (Component c : circuit.components()) {
             if (!c.type().isPump()) {
                 continue;
             }
-            int outlet = label[index.get(new NetNode.Port(c.id(), "P"))];
-            if (c.type() == ComponentType.FIXED_PUMP && !relieved.contains(outlet)) {
+            int outlet = label[netlist.portIndex(c.id(), "P")];
+            if (c.type() == ComponentType.FIXED_PUMP && !relieved[outlet]) {
                 out.add(new Diagnostic(Severity.ERROR, "the outlet of fixed pump " + c.tag()
                         + " reaches no relief valve in state " + state.name()
                         + ": its pressure would rise until something breaks. Add a relief valve at the pump.",
                         List.of(c.tag())));
             }
-            if (!fed.contains(label[index.get(new NetNode.Port(c.id(), "S"))])) {
+            if (!fed[label[netlist.portIndex(c.id(), "S")]]) {
                 out.add(new Diagnostic(Severity.ERROR, "the inlet S of pump " + c.tag()
                         + " is not fed from a reservoir: it would run dry", List.of(c.tag())));
             }
@@ -259,7 +254,7 @@ public final class TopologyCheck {
 
     private void locked(List<Diagnostic> out) {
         int[] label = parts(true);
-        Set<Integer> escape = partsWith(label, Set.of(ComponentType.RESERVOIR, ComponentType.FIXED_PUMP,
+        boolean[] escape = partsWith(label, Set.of(ComponentType.RESERVOIR, ComponentType.FIXED_PUMP,
                 ComponentType.COMPENSATED_PUMP, ComponentType.ACCUMULATOR), null);
         for (Component c : circuit.components()) {
             if (!c.type().isActuator()) {
@@ -271,7 +266,7 @@ public final class TopologyCheck {
             }
             List<String> trapped = new ArrayList<>();
             for (PortSpec ps : c.type().ports()) {
-                if (!ps.mechanical() && !escape.contains(label[index.get(new NetNode.Port(c.id(), ps.name()))])) {
+                if (!ps.mechanical() && !escape[label[netlist.portIndex(c.id(), ps.name())]]) {
                     trapped.add(ps.name());
                 }
             }
