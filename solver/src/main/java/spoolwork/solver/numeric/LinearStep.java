@@ -23,8 +23,8 @@ import org.ejml.dense.row.factory.LinearSolverFactory_DDRM;
 final class LinearStep implements Jacobian {
     private final int n;
     private final boolean dense;
-    private Triplets current = new Triplets();
-    private Triplets trial = new Triplets();
+    private Triplets current;
+    private Triplets trial;
     private boolean bandOrdering;
 
     private final boolean[] eliminable;
@@ -37,6 +37,9 @@ final class LinearStep implements Jacobian {
 
     LinearStep(int n, LinearMethod method, NonlinearSystem s) {
         this.n = n;
+        // about six entries per unknown in these systems; the buffers grow if need be
+        this.current = new Triplets(Math.max(256, 6 * n));
+        this.trial = new Triplets(Math.max(256, 6 * n));
         this.dense = method == LinearMethod.DENSE || (method == LinearMethod.AUTO && n <= LinearMethod.DENSE_LIMIT);
         this.eliminable = new boolean[n];
         this.delayed = new boolean[n];
@@ -56,10 +59,16 @@ final class LinearStep implements Jacobian {
 
     /** Jacobian entries in the order they arrived; entries for the same place are summed later. */
     private static final class Triplets implements Jacobian {
-        int[] rows = new int[256];
-        int[] cols = new int[256];
-        double[] vals = new double[256];
+        int[] rows;
+        int[] cols;
+        double[] vals;
         int count;
+
+        Triplets(int capacity) {
+            rows = new int[capacity];
+            cols = new int[capacity];
+            vals = new double[capacity];
+        }
 
         @Override
         public void add(int row, int col, double value) {
@@ -225,14 +234,10 @@ final class LinearStep implements Jacobian {
                 y[pl.place[i]] = b[i];
             }
         }
-        if (!pl.update.solve(nz, y)) {
-            if (!pl.lu.factor(nz)) {
-                pl.update.forget();
-                return null;
-            }
-            pl.update.factored(nz);
-            pl.lu.solve(y, y);
+        if (!pl.lu.factor(nz)) {
+            return null;
         }
+        pl.lu.solve(y, y);
         double[] out = new double[n];
         for (int i = 0; i < n; i++) {
             if (pl.place[i] >= 0) {
@@ -286,7 +291,24 @@ final class LinearStep implements Jacobian {
         double[] b;
         double[] y;
         SparseLu lu;
-        RowUpdate update;
+
+        /** Index of entry (row, col) in the compressed columns; the entry must be in the pattern. */
+        int position(int row, int col) {
+            int lo = colPtr[col];
+            int hi = colPtr[col + 1] - 1;
+            while (lo <= hi) {
+                int mid = (lo + hi) >>> 1;
+                int r = rowIdx[mid];
+                if (r < row) {
+                    lo = mid + 1;
+                } else if (r > row) {
+                    hi = mid - 1;
+                } else {
+                    return mid;
+                }
+            }
+            throw new IllegalStateException("entry (" + row + ", " + col + ") is not in the pattern");
+        }
 
         boolean fits(int[] rows, int[] cols, int count) {
             if (count != rowsSeen.length) {
@@ -402,47 +424,61 @@ final class LinearStep implements Jacobian {
             for (int i = 0; i < n; i++) {
                 p.place[i] = kept[i] < 0 ? -1 : inverse[kept[i]];
             }
-            // unique (column, row) pairs in the new numbering, as CSC
-            long[] keys = new long[total];
+            // unique (column, row) pairs in the new numbering, as CSC with rows sorted in each column:
+            // bucket the entries by column, then sort each short column and drop repeats
+            int[] start = new int[m + 1];
             for (int t = 0; t < total; t++) {
-                keys[t] = (long) inverse[pc[t]] * m + inverse[pr[t]];
-            }
-            long[] sorted = keys.clone();
-            Arrays.sort(sorted);
-            int unique = 0;
-            for (int t = 0; t < total; t++) {
-                if (t == 0 || sorted[t] != sorted[t - 1]) {
-                    sorted[unique++] = sorted[t];
-                }
-            }
-            p.colPtr = new int[m + 1];
-            p.rowIdx = new int[unique];
-            for (int t = 0; t < unique; t++) {
-                int col = (int) (sorted[t] / m);
-                p.rowIdx[t] = (int) (sorted[t] % m);
-                p.colPtr[col + 1]++;
+                start[inverse[pc[t]] + 1]++;
             }
             for (int c = 0; c < m; c++) {
-                p.colPtr[c + 1] += p.colPtr[c];
+                start[c + 1] += start[c];
             }
+            int[] next = Arrays.copyOf(start, m);
+            int[] bucketRow = new int[total];
+            for (int t = 0; t < total; t++) {
+                bucketRow[next[inverse[pc[t]]]++] = inverse[pr[t]];
+            }
+            p.colPtr = new int[m + 1];
+            int unique = 0;
+            for (int c = 0; c < m; c++) {
+                int lo = start[c];
+                int hi = start[c + 1];
+                for (int i = lo + 1; i < hi; i++) {
+                    int v = bucketRow[i];
+                    int j = i - 1;
+                    while (j >= lo && bucketRow[j] > v) {
+                        bucketRow[j + 1] = bucketRow[j];
+                        j--;
+                    }
+                    bucketRow[j + 1] = v;
+                }
+                int from = unique;
+                for (int i = lo; i < hi; i++) {
+                    if (i == lo || bucketRow[i] != bucketRow[i - 1]) {
+                        bucketRow[unique++] = bucketRow[i];
+                    }
+                }
+                p.colPtr[c] = from;
+            }
+            p.colPtr[m] = unique;
+            p.rowIdx = Arrays.copyOf(bucketRow, unique);
             p.values = new double[unique];
             p.pivot = new double[n];
             p.rowVal = new double[p.rowSlots];
             p.colVal = new double[p.colSlots];
             p.b = new double[n];
             p.y = new double[m];
-            long[] uniq = Arrays.copyOf(sorted, unique);
             int t = 0;
             for (int k = 0; k < count; k++) {
                 if (p.role[k] == KEPT) {
-                    p.dest[k] = Arrays.binarySearch(uniq, keys[t++]);
+                    p.dest[k] = p.position(inverse[pr[t]], inverse[pc[t]]);
+                    t++;
                 }
             }
             p.fill = new int[fills];
             for (int q = 0; q < fills; q++) {
-                p.fill[q] = Arrays.binarySearch(uniq, keys[keptEntries + q]);
+                p.fill[q] = p.position(inverse[pr[keptEntries + q]], inverse[pc[keptEntries + q]]);
             }
-            p.update = new RowUpdate(p);
             return p;
         }
     }
@@ -492,225 +528,5 @@ final class LinearStep implements Jacobian {
             }
         }
         return true;
-    }
-
-    /**
-     * Solves with a matrix that differs from the factorised one in a few rows only, as after complementarity
-     * rows change sides within one Newton step, without factorising again: with F the factorised matrix and
-     * A = F + U·Dᵀ (U the unit columns of the changed rows, Dᵀ their differences), the Sherman–Morrison–
-     * Woodbury identity gives A⁻¹y = z − Z·(I + Dᵀ·Z)⁻¹·Dᵀ·z with z = F⁻¹y and Z = F⁻¹U (Golub & Van Loan,
-     * Matrix Computations, §2.1.4). The columns of Z are kept while F stays the same. The answer is checked
-     * by its residual; when it is not good, or too many rows changed, the caller factorises instead.
-     */
-    static final class RowUpdate {
-        /** Most changed rows taken this way; beyond it a refactorisation is cheaper. */
-        static final int MAX_ROWS = 24;
-
-        private final Plan plan;
-        private final int m;
-        private final int[] colOf;
-        private double[] factored;
-        private final int[] slotOf;
-        private final double[][] columns = new double[MAX_ROWS][];
-        private final int[] rowOfSlot = new int[MAX_ROWS];
-        private int slots;
-        private final boolean[] changed;
-        private final int[] changedRows = new int[MAX_ROWS];
-        private final double[] work;
-
-        RowUpdate(Plan plan) {
-            this.plan = plan;
-            this.m = plan.m;
-            int nnz = plan.colPtr[m];
-            this.colOf = new int[nnz];
-            for (int c = 0; c < m; c++) {
-                for (int p = plan.colPtr[c]; p < plan.colPtr[c + 1]; p++) {
-                    colOf[p] = c;
-                }
-            }
-            this.slotOf = new int[m];
-            Arrays.fill(slotOf, -1);
-            this.changed = new boolean[m];
-            this.work = new double[m];
-        }
-
-        /** Records the values just factorised. */
-        void factored(double[] values) {
-            if (factored == null) {
-                factored = new double[values.length];
-            }
-            System.arraycopy(values, 0, factored, 0, values.length);
-            forgetColumns();
-        }
-
-        /** No factorisation to build on. */
-        void forget() {
-            factored = null;
-            forgetColumns();
-        }
-
-        private void forgetColumns() {
-            for (int k = 0; k < slots; k++) {
-                slotOf[rowOfSlot[k]] = -1;
-            }
-            slots = 0;
-        }
-
-        /** Solves A·y = y in place when A differs from the factorised matrix in a few rows; false otherwise. */
-        boolean solve(double[] values, double[] y) {
-            if (factored == null) {
-                return false;
-            }
-            int[] rowIdx = plan.rowIdx;
-            int k = 0;
-            boolean same = true;
-            for (int p = 0; p < values.length; p++) {
-                if (values[p] != factored[p]) {
-                    same = false;
-                    int r = rowIdx[p];
-                    if (!changed[r]) {
-                        if (k == MAX_ROWS) {
-                            clearChanged(k);
-                            return false;
-                        }
-                        changed[r] = true;
-                        changedRows[k++] = r;
-                    }
-                }
-            }
-            if (same) {
-                plan.lu.solve(y, y);
-                return true;
-            }
-            double[] rhs = work;
-            System.arraycopy(y, 0, rhs, 0, m);
-            // Z = F⁻¹·U for the changed rows, kept while F stays
-            double[][] z = new double[k][];
-            for (int i = 0; i < k; i++) {
-                int r = changedRows[i];
-                int slot = slotOf[r];
-                if (slot < 0) {
-                    if (slots == MAX_ROWS) {
-                        forgetColumns();
-                        clearChanged(k);
-                        return false;
-                    }
-                    double[] col = new double[m];
-                    col[r] = 1;
-                    plan.lu.solve(col, col);
-                    slot = slots++;
-                    columns[slot] = col;
-                    rowOfSlot[slot] = r;
-                    slotOf[r] = slot;
-                }
-                z[i] = columns[slot];
-            }
-            plan.lu.solve(y, y);
-            // S = I + Dᵀ·Z and Dᵀ·z, from the differences of the changed rows
-            double[][] sm = new double[k][k + 1];
-            for (int i = 0; i < k; i++) {
-                sm[i][i] = 1;
-            }
-            int[] index = new int[m];
-            for (int i = 0; i < k; i++) {
-                index[changedRows[i]] = i;
-            }
-            for (int p = 0; p < values.length; p++) {
-                double d = values[p] - factored[p];
-                if (d != 0) {
-                    int i = index[rowIdx[p]];
-                    int c = colOf[p];
-                    for (int j = 0; j < k; j++) {
-                        sm[i][j] += d * z[j][c];
-                    }
-                    sm[i][k] += d * y[c];
-                }
-            }
-            clearChanged(k);
-            double[] w = Dense.solveInPlace(sm, k);
-            if (w == null) {
-                System.arraycopy(rhs, 0, y, 0, m);
-                return false;
-            }
-            for (int j = 0; j < k; j++) {
-                double wj = w[j];
-                double[] zj = z[j];
-                for (int c = 0; c < m; c++) {
-                    y[c] -= zj[c] * wj;
-                }
-            }
-            // residual of A·y = rhs; a poor answer is left to a fresh factorisation
-            double[] res = new double[m];
-            double norm = 0;
-            for (int c = 0; c < m; c++) {
-                for (int p = plan.colPtr[c]; p < plan.colPtr[c + 1]; p++) {
-                    res[rowIdx[p]] += values[p] * y[c];
-                    norm = Math.max(norm, Math.abs(values[p] * y[c]));
-                }
-            }
-            double worst = 0;
-            for (int r = 0; r < m; r++) {
-                worst = Math.max(worst, Math.abs(res[r] - rhs[r]));
-                norm = Math.max(norm, Math.abs(rhs[r]));
-            }
-            if (!(worst <= 1e-10 * norm)) {
-                System.arraycopy(rhs, 0, y, 0, m);
-                return false;
-            }
-            return true;
-        }
-
-        private void clearChanged(int k) {
-            for (int i = 0; i < k; i++) {
-                changed[changedRows[i]] = false;
-            }
-        }
-    }
-
-    /** Gaussian elimination with partial pivoting on a small dense augmented matrix. */
-    static final class Dense {
-        private Dense() {
-        }
-
-        /** Solves a[0..k)[0..k)·w = a[·][k]; null when a pivot is not clearly non-zero. */
-        static double[] solveInPlace(double[][] a, int k) {
-            double scale = 0;
-            for (int i = 0; i < k; i++) {
-                for (int j = 0; j < k; j++) {
-                    scale = Math.max(scale, Math.abs(a[i][j]));
-                }
-            }
-            for (int c = 0; c < k; c++) {
-                int best = c;
-                for (int r = c + 1; r < k; r++) {
-                    if (Math.abs(a[r][c]) > Math.abs(a[best][c])) {
-                        best = r;
-                    }
-                }
-                if (!(Math.abs(a[best][c]) > 1e-12 * scale)) {
-                    return null;
-                }
-                double[] t = a[c];
-                a[c] = a[best];
-                a[best] = t;
-                for (int r = c + 1; r < k; r++) {
-                    double f = a[r][c] / a[c][c];
-                    if (f != 0) {
-                        for (int j = c; j <= k; j++) {
-                            a[r][j] -= f * a[c][j];
-                        }
-                    }
-                }
-            }
-            double[] w = new double[k];
-            for (int r = k - 1; r >= 0; r--) {
-                double sum = a[r][k];
-                for (int j = r + 1; j < k; j++) {
-                    sum -= a[r][j] * w[j];
-                }
-                w[r] = sum / a[r][r];
-            }
-            return w;
-        }
     }
 }
