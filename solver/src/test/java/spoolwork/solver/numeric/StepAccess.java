@@ -1,0 +1,27 @@
+package spoolwork.solver.numeric;
+
+/** One linear Newton step of a system at a point, with a chosen linear method, for benchmarks. */
+public final class StepAccess {
+    private StepAccess() {
+    }
+
+    /** Evaluates the system and its Jacobian at x and solves for the scaled Newton step; null if singular. */
+    public static double[] step(NonlinearSystem s, double[] x, LinearMethod method) {
+        int n = s.size();
+        double[] f = new double[n];
+        double[] rowScale = new double[n];
+        double[] colScale = new double[n];
+        for (int i = 0; i < n; i++) {
+            rowScale[i] = s.rowScale(i);
+            colScale[i] = s.unknownScale(i);
+        }
+        LinearStep lin = new LinearStep(n, method, s);
+        s.beginRun();
+        s.evaluate(x, f, lin);
+        double[] rhs = new double[n];
+        for (int i = 0; i < n; i++) {
+            rhs[i] = -s.stepResidual(i, f) / rowScale[i];
+        }
+        return lin.solve(rhs, rowScale, colScale);
+    }
+}
