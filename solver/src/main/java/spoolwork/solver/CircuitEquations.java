@@ -16,7 +16,9 @@ import spoolwork.model.Endpoint;
 import spoolwork.model.Line;
 import spoolwork.model.LineKind;
 import spoolwork.model.OperatingState;
+import spoolwork.model.PortSpec;
 import spoolwork.model.SpoolPosition;
+import spoolwork.model.netlist.NetEdge;
 import spoolwork.model.netlist.NetNode;
 import spoolwork.model.netlist.Netlist;
 import spoolwork.solver.elements.Actuator;
@@ -97,6 +99,7 @@ final class CircuitEquations {
             }
         }
         this.net = new Network(fluid, pRef, Math.max(qRef, 1e-5));
+        lineEnds();
         numberNodes();
         int[] all = new int[nodeNames.size()];
         for (int i = 0; i < all.length; i++) {
@@ -107,14 +110,7 @@ final class CircuitEquations {
         int li = -1;
         for (Line l : circuit.lines()) {
             li++;
-            if (l.kind() == LineKind.SHAFT) {
-                lineStart[li] = -1;
-                lineEnd[li] = -1;
-                continue;
-            }
-            lineStart[li] = netlist.indexOf(l.from());
-            lineEnd[li] = netlist.indexOf(l.to());
-            if (l.ideal()) {
+            if (l.kind() == LineKind.SHAFT || l.ideal()) {
                 continue;
             }
             LineLaw law = new LineLaw(l.diameter(), l.length(), fluid.density(), fluid.kinematicViscosity(),
@@ -126,12 +122,51 @@ final class CircuitEquations {
             lineBranches.put(l.id(), b);
             lineLaws.put(l.id(), law);
         }
+        int base = 0;
         for (Component c : circuit.components()) {
             List<Element> es = new ArrayList<>();
+            building = c;
+            buildingBase = base;
             build(c, es);
+            for (PortSpec p : c.type().ports()) {
+                if (!p.mechanical()) {
+                    base++;
+                }
+            }
             es.forEach(net::addElement);
             elementsOf.put(c.id(), es);
             componentElements.add(es);
+        }
+        building = null;
+    }
+
+    /** The component being built and the netlist number of its first hydraulic port. */
+    private Component building;
+    private int buildingBase;
+
+    /**
+     * The netlist node numbers of every line's ends. The netlist numbers the drawn lines first, in drawing
+     * order, so their ends are read from its edges; a line found otherwise is looked up by its endpoints.
+     */
+    private void lineEnds() {
+        int li = -1;
+        int k = 0;
+        int edgeCount = netlist.edgeCount();
+        for (Line l : circuit.lines()) {
+            li++;
+            if (l.kind() == LineKind.SHAFT) {
+                lineStart[li] = -1;
+                lineEnd[li] = -1;
+                continue;
+            }
+            if (k < edgeCount && netlist.edge(k) instanceof NetEdge.LineEdge e && e.lineId().equals(l.id())) {
+                lineStart[li] = netlist.edgeSource(k);
+                lineEnd[li] = netlist.edgeTarget(k);
+                k++;
+            } else {
+                lineStart[li] = netlist.indexOf(l.from());
+                lineEnd[li] = netlist.indexOf(l.to());
+            }
         }
     }
 
@@ -160,9 +195,11 @@ final class CircuitEquations {
                 union(parent, ground, r);
             }
         }
+        int li = -1;
         for (Line l : circuit.lines()) {
+            li++;
             if (l.kind() != LineKind.SHAFT && l.ideal()) {
-                union(parent, netlist.indexOf(l.from()), netlist.indexOf(l.to()));
+                union(parent, lineStart[li], lineEnd[li]);
             }
         }
         int groundRoot = ground < 0 ? -1 : find(parent, ground);
@@ -248,8 +285,26 @@ final class CircuitEquations {
         return nodeAt[netlist.indexOf(e)];
     }
 
+    /** The netlist number of a component's hydraulic port, or −1 when there is no such hydraulic port. */
+    private int portIndex(Component c, String port) {
+        if (c != building) {
+            return netlist.portIndex(c.id(), port);
+        }
+        int i = buildingBase;
+        for (PortSpec p : c.type().ports()) {
+            if (p.mechanical()) {
+                continue;
+            }
+            if (p.name().equals(port)) {
+                return i;
+            }
+            i++;
+        }
+        return -1;
+    }
+
     int node(Component c, String port) {
-        int i = netlist.portIndex(c.id(), port);
+        int i = portIndex(c, port);
         if (i < 0) {
             throw new NullPointerException(c.tag() + " has no hydraulic port " + port);
         }
@@ -257,7 +312,7 @@ final class CircuitEquations {
     }
 
     private boolean connected(Component c, String port) {
-        int i = netlist.portIndex(c.id(), port);
+        int i = portIndex(c, port);
         return i >= 0 && netlist.lineDegree(i) > 0;
     }
 

@@ -43,7 +43,10 @@ import spoolwork.model.PortSpec;
 public final class Netlist {
     private final Circuit circuit;
     private final Graph<NetNode, NetEdge> graph;
-    private final Graph<NetNode, NetEdge> lineGraph;
+    /** The graph of lines alone, built on first use: only {@link #nets} and {@link #netOf} walk it. */
+    private volatile Graph<NetNode, NetEdge> lineGraph;
+    /** Number of line edges; they come first in the edge numbering, in drawing order. */
+    private final int lineEdgeCount;
     private final Map<String, String> driverOf;
     /** Every node, numbered in graph vertex order: component ports in drawing order, then junctions. */
     private final NetNode[] nodes;
@@ -85,7 +88,6 @@ public final class Netlist {
         firstNode = new HashMap<>(capacity(circuit.components().size() + circuit.junctions().size()));
         reservoirNodes = new int[reservoirCount];
         Graph<NetNode, NetEdge> g = new NetGraph();
-        Graph<NetNode, NetEdge> lg = new NetGraph();
         int k = 0;
         int r = 0;
         for (Component c : circuit.components()) {
@@ -94,7 +96,6 @@ public final class Netlist {
                 if (!p.mechanical()) {
                     NetNode n = new NetNode.Port(c.id(), p.name());
                     g.addVertex(n);
-                    lg.addVertex(n);
                     if (c.type() == ComponentType.RESERVOIR) {
                         reservoirNodes[r++] = k;
                     }
@@ -106,7 +107,6 @@ public final class Netlist {
         for (Junction j : circuit.junctions()) {
             NetNode n = new NetNode.Junction(j.id());
             g.addVertex(n);
-            lg.addVertex(n);
             firstNode.put(j.id(), k);
             nodes[k++] = n;
         }
@@ -132,7 +132,6 @@ public final class Netlist {
             int b = existing(l.to());
             NetEdge e = new NetEdge.LineEdge(l.id());
             g.addEdge(nodes[a], nodes[b], e);
-            lg.addEdge(nodes[a], nodes[b], e);
             lineDegree[a]++;
             lineDegree[b]++;
             if (m == es.length) {
@@ -144,6 +143,7 @@ public final class Netlist {
             dst[m] = b;
             es[m++] = e;
         }
+        this.lineEdgeCount = m;
         // the paths of a directional valve depend on its type, options and spool position only
         Map<List<Object>, List<List<String>>> valvePaths = new HashMap<>();
         for (Component c : circuit.components()) {
@@ -171,7 +171,6 @@ public final class Netlist {
         this.edgeTarget = Arrays.copyOf(dst, m);
         this.edges = Arrays.copyOf(es, m);
         this.graph = new AsUnmodifiableGraph<>(g);
-        this.lineGraph = new AsUnmodifiableGraph<>(lg);
         this.driverOf = Collections.unmodifiableMap(drivers);
     }
 
@@ -185,6 +184,28 @@ public final class Netlist {
         NetGraph() {
             super(null, null, DefaultGraphType.pseudograph(), new DefaultGraphSpecificsStrategy<>());
         }
+    }
+
+    /** The graph of every node and the drawn lines alone, in the same vertex and edge order as {@link #graph}. */
+    private Graph<NetNode, NetEdge> lineGraph() {
+        Graph<NetNode, NetEdge> lg = lineGraph;
+        if (lg == null) {
+            synchronized (this) {
+                lg = lineGraph;
+                if (lg == null) {
+                    Graph<NetNode, NetEdge> built = new NetGraph();
+                    for (NetNode n : nodes) {
+                        built.addVertex(n);
+                    }
+                    for (int k = 0; k < lineEdgeCount; k++) {
+                        built.addEdge(nodes[edgeSource[k]], nodes[edgeTarget[k]], edges[k]);
+                    }
+                    lg = new AsUnmodifiableGraph<>(built);
+                    lineGraph = lg;
+                }
+            }
+        }
+        return lg;
     }
 
     private static int capacity(int entries) {
@@ -331,12 +352,12 @@ public final class Netlist {
 
     /** Nets: nodes joined by lines and junctions alone (copies); a lone unconnected port is a net of its own. */
     public List<Set<NetNode>> nets() {
-        return copy(new ConnectivityInspector<>(lineGraph).connectedSets());
+        return copy(new ConnectivityInspector<>(lineGraph()).connectedSets());
     }
 
     /** The net containing the given node. */
     public Set<NetNode> netOf(NetNode n) {
-        return Collections.unmodifiableSet(new LinkedHashSet<>(new ConnectivityInspector<>(lineGraph).connectedSetOf(n)));
+        return Collections.unmodifiableSet(new LinkedHashSet<>(new ConnectivityInspector<>(lineGraph()).connectedSetOf(n)));
     }
 
     /** A path with the fewest edges between two nodes through lines and internal paths, if any. */

@@ -18,8 +18,16 @@ public final class LineLaw implements DropLaw {
     private final double nu;
     private final double relRoughness;
     private final double area;
-    /** Scratch for the friction factor's derivative; a law object serves one line of one solve. */
-    private final double[] dfScratch = new double[1];
+    /** Parts of {@link #drop} that depend on the line alone, each written as the law writes it. */
+    private final double lamPerVelocity;
+    private final double dSquared;
+    private final double dlam;
+    private final double nuArea;
+    private final double dyn;
+    /** The roughness term of the Haaland form, (ε/D / 3.7)^1.11. */
+    private final double roughTerm;
+
+    private static final double LN10 = Math.log(10);
 
     /**
      * @param diameter  inner diameter, m
@@ -35,6 +43,12 @@ public final class LineLaw implements DropLaw {
         this.nu = viscosity;
         this.relRoughness = roughness / diameter;
         this.area = Math.PI * diameter * diameter / 4;
+        this.lamPerVelocity = 32 * rho * nu * length;
+        this.dSquared = d * d;
+        this.dlam = 32 * rho * nu * length / (d * d * area);
+        this.nuArea = nu * area;
+        this.dyn = length / d * rho / 2;
+        this.roughTerm = Math.pow(relRoughness / 3.7, 1.11);
     }
 
     /** Mean velocity at flow q, m/s. */
@@ -53,7 +67,7 @@ public final class LineLaw implements DropLaw {
         double lg = Math.log10(xx);
         double f = 1 / (3.24 * lg * lg);
         double dxdre = -6.9 / (re * re);
-        df[0] = -2 / (3.24 * lg * lg * lg) / (xx * Math.log(10)) * dxdre;
+        df[0] = -2 / (3.24 * lg * lg * lg) / (xx * LN10) * dxdre;
         return f;
     }
 
@@ -71,22 +85,24 @@ public final class LineLaw implements DropLaw {
     @Override
     public double drop(double q, double[] dd) {
         double v = q / area;
-        double lam = 32 * rho * nu * length * v / (d * d);
-        double dlam = 32 * rho * nu * length / (d * d * area);
+        double lam = lamPerVelocity * v / dSquared;
         double re = Math.abs(v) * d / nu;
         if (re <= RE_LAMINAR) {
             dd[0] = dlam;
             return lam;
         }
-        double dre = Math.signum(q) * d / (nu * area);
+        double dre = Math.signum(q) * d / nuArea;
         double s = Math.min(1, (re - RE_LAMINAR) / (RE_TURBULENT - RE_LAMINAR));
         double w = s * s * (3 - 2 * s);
         double dw = re < RE_TURBULENT ? 6 * s * (1 - s) / (RE_TURBULENT - RE_LAMINAR) * dre : 0;
-        double[] df = dfScratch;
-        double f = haaland(re, relRoughness, df);
-        double dyn = length / d * rho / 2;
+        // the Haaland form as in haaland(), with its roughness term worked out once per line
+        double xx = roughTerm + 6.9 / re;
+        double lg = Math.log10(xx);
+        double f = 1 / (3.24 * lg * lg);
+        double dxdre = -6.9 / (re * re);
+        double df = -2 / (3.24 * lg * lg * lg) / (xx * LN10) * dxdre;
         double turb = f * dyn * v * Math.abs(v);
-        double dturb = dyn * (df[0] * dre * v * Math.abs(v) + f * 2 * Math.abs(v) / area);
+        double dturb = dyn * (df * dre * v * Math.abs(v) + f * 2 * Math.abs(v) / area);
         dd[0] = (1 - w) * dlam + w * dturb + dw * (turb - lam);
         return (1 - w) * lam + w * turb;
     }

@@ -1,7 +1,9 @@
 package spoolwork.solver.elements;
 
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
+import java.util.Objects;
 
 import spoolwork.solver.fluid.FluidProperties;
 import spoolwork.solver.numeric.Jacobian;
@@ -15,10 +17,16 @@ public final class Network implements NonlinearSystem {
     /** Kind of an unknown, which fixes its scale and the tolerance of its row. */
     public enum Kind { PRESSURE, FLOW, VELOCITY, SPEED, COMPLEMENTARITY }
 
-    private final List<Kind> kinds = new ArrayList<>();
-    private final List<String> owners = new ArrayList<>();
-    private final List<double[]> scales = new ArrayList<>();
+    /** Per unknown, in growing arrays of which the first {@link #count} entries are in use. */
+    private Kind[] kinds = new Kind[16];
+    private String[] owners = new String[16];
+    private double[] unknownScales = new double[16];
+    private double[] rowScales = new double[16];
+    private double[] rowTolerances = new double[16];
+    private int count;
     private final List<Element> elements = new ArrayList<>();
+    /** The elements as an array for {@link #evaluate}, rebuilt when one is added. */
+    private Element[] elementArray;
     private final FluidProperties fluid;
     private final double pressureRef;
     private final double flowRef;
@@ -47,15 +55,26 @@ public final class Network implements NonlinearSystem {
      * @param tolerance row tolerance, in the row's unit
      */
     public int add(Kind kind, String owner, double scale, double rowScale, double tolerance) {
-        kinds.add(kind);
-        owners.add(owner);
-        scales.add(new double[]{scale, rowScale, tolerance});
+        if (count == kinds.length) {
+            int grown = 2 * count;
+            kinds = Arrays.copyOf(kinds, grown);
+            owners = Arrays.copyOf(owners, grown);
+            unknownScales = Arrays.copyOf(unknownScales, grown);
+            rowScales = Arrays.copyOf(rowScales, grown);
+            rowTolerances = Arrays.copyOf(rowTolerances, grown);
+        }
+        kinds[count] = kind;
+        owners[count] = owner;
+        unknownScales[count] = scale;
+        rowScales[count] = rowScale;
+        rowTolerances[count] = tolerance;
         us = null;
-        return kinds.size() - 1;
+        return count++;
     }
 
     public void addElement(Element e) {
         elements.add(e);
+        elementArray = null;
     }
 
     public List<Element> elements() {
@@ -105,25 +124,19 @@ public final class Network implements NonlinearSystem {
     }
 
     public Kind kind(int i) {
-        return kinds.get(i);
+        return kinds[Objects.checkIndex(i, count)];
     }
 
     /** The component tag, line id or node name that unknown i and its row belong to. */
     public String owner(int i) {
-        return owners.get(i);
+        return owners[Objects.checkIndex(i, count)];
     }
 
     private void freeze() {
         if (us == null) {
-            int n = kinds.size();
-            us = new double[n];
-            rs = new double[n];
-            rt = new double[n];
-            for (int i = 0; i < n; i++) {
-                us[i] = scales.get(i)[0];
-                rs[i] = scales.get(i)[1];
-                rt[i] = scales.get(i)[2];
-            }
+            us = Arrays.copyOf(unknownScales, count);
+            rs = Arrays.copyOf(rowScales, count);
+            rt = Arrays.copyOf(rowTolerances, count);
         }
     }
 
@@ -138,13 +151,18 @@ public final class Network implements NonlinearSystem {
 
     @Override
     public int size() {
-        return kinds.size();
+        return count;
     }
 
     @Override
     public void evaluate(double[] x, double[] f, Jacobian j) {
-        java.util.Arrays.fill(f, 0);
-        for (Element e : elements) {
+        Arrays.fill(f, 0);
+        Element[] es = elementArray;
+        if (es == null || es.length != elements.size()) {
+            es = elements.toArray(new Element[0]);
+            elementArray = es;
+        }
+        for (Element e : es) {
             e.load(x, f, j, this);
         }
     }
@@ -268,7 +286,7 @@ public final class Network implements NonlinearSystem {
 
     @Override
     public double stepResidual(int i, double[] f) {
-        if (kinds.get(i) != Kind.COMPLEMENTARITY || side == null || side[i] < 0) {
+        if (kind(i) != Kind.COMPLEMENTARITY || side == null || side[i] < 0) {
             return f[i];
         }
         return side[i] == 0 ? pairA[i] : pairB[i];
@@ -334,16 +352,16 @@ public final class Network implements NonlinearSystem {
 
     @Override
     public boolean eliminable(int i) {
-        return kinds.get(i) == Kind.FLOW;
+        return kind(i) == Kind.FLOW;
     }
 
     @Override
     public boolean switchesSides(int i) {
-        return kinds.get(i) == Kind.COMPLEMENTARITY;
+        return kind(i) == Kind.COMPLEMENTARITY;
     }
 
     @Override
     public boolean isPressure(int i) {
-        return kinds.get(i) == Kind.PRESSURE;
+        return kind(i) == Kind.PRESSURE;
     }
 }
