@@ -37,12 +37,14 @@ import spoolwork.model.PortSpec;
  * (shaft couplings excluded) and the component-internal paths of the state: the open spool paths of each
  * directional valve and the main path of every other valve, pump and motor (see
  * {@link ComponentType#internalPaths}). A "net" is a set of nodes joined by lines alone, i.e. the points
- * that share one pressure when lines have no loss. Built once in the constructor; all results are
+ * that share one pressure when lines have no loss. The constructor numbers the nodes and edges (the
+ * solver works on that numbering); the JGraphT graphs are built from it on first use. All results are
  * unmodifiable.
  */
 public final class Netlist {
     private final Circuit circuit;
-    private final Graph<NetNode, NetEdge> graph;
+    /** The whole graph, built on first use from the numbered nodes and edges below. */
+    private volatile Graph<NetNode, NetEdge> graph;
     /** The graph of lines alone, built on first use: only {@link #nets} and {@link #netOf} walk it. */
     private volatile Graph<NetNode, NetEdge> lineGraph;
     /** Number of line edges; they come first in the edge numbering, in drawing order. */
@@ -87,7 +89,6 @@ public final class Netlist {
         lineDegree = new int[count];
         firstNode = new HashMap<>(capacity(circuit.components().size() + circuit.junctions().size()));
         reservoirNodes = new int[reservoirCount];
-        Graph<NetNode, NetEdge> g = new NetGraph();
         int k = 0;
         int r = 0;
         for (Component c : circuit.components()) {
@@ -95,7 +96,6 @@ public final class Netlist {
             for (PortSpec p : c.type().ports()) {
                 if (!p.mechanical()) {
                     NetNode n = new NetNode.Port(c.id(), p.name());
-                    g.addVertex(n);
                     if (c.type() == ComponentType.RESERVOIR) {
                         reservoirNodes[r++] = k;
                     }
@@ -106,7 +106,6 @@ public final class Netlist {
         }
         for (Junction j : circuit.junctions()) {
             NetNode n = new NetNode.Junction(j.id());
-            g.addVertex(n);
             firstNode.put(j.id(), k);
             nodes[k++] = n;
         }
@@ -131,7 +130,6 @@ public final class Netlist {
             int a = existing(l.from());
             int b = existing(l.to());
             NetEdge e = new NetEdge.LineEdge(l.id());
-            g.addEdge(nodes[a], nodes[b], e);
             lineDegree[a]++;
             lineDegree[b]++;
             if (m == es.length) {
@@ -156,7 +154,6 @@ public final class Netlist {
                 int a = existingPort(c.id(), path.get(0));
                 int b = existingPort(c.id(), path.get(1));
                 NetEdge e = new NetEdge.InternalEdge(c.id(), path.get(0), path.get(1));
-                g.addEdge(nodes[a], nodes[b], e);
                 if (m == es.length) {
                     src = Arrays.copyOf(src, 2 * m);
                     dst = Arrays.copyOf(dst, 2 * m);
@@ -170,7 +167,6 @@ public final class Netlist {
         this.edgeSource = Arrays.copyOf(src, m);
         this.edgeTarget = Arrays.copyOf(dst, m);
         this.edges = Arrays.copyOf(es, m);
-        this.graph = new AsUnmodifiableGraph<>(g);
         this.driverOf = Collections.unmodifiableMap(drivers);
     }
 
@@ -186,6 +182,18 @@ public final class Netlist {
         }
     }
 
+    /** The graph of the first {@code edgeCount} edges over every node, in numbering order. */
+    private Graph<NetNode, NetEdge> build(int edgeCount) {
+        Graph<NetNode, NetEdge> built = new NetGraph();
+        for (NetNode n : nodes) {
+            built.addVertex(n);
+        }
+        for (int k = 0; k < edgeCount; k++) {
+            built.addEdge(nodes[edgeSource[k]], nodes[edgeTarget[k]], edges[k]);
+        }
+        return new AsUnmodifiableGraph<>(built);
+    }
+
     /** The graph of every node and the drawn lines alone, in the same vertex and edge order as {@link #graph}. */
     private Graph<NetNode, NetEdge> lineGraph() {
         Graph<NetNode, NetEdge> lg = lineGraph;
@@ -193,14 +201,7 @@ public final class Netlist {
             synchronized (this) {
                 lg = lineGraph;
                 if (lg == null) {
-                    Graph<NetNode, NetEdge> built = new NetGraph();
-                    for (NetNode n : nodes) {
-                        built.addVertex(n);
-                    }
-                    for (int k = 0; k < lineEdgeCount; k++) {
-                        built.addEdge(nodes[edgeSource[k]], nodes[edgeTarget[k]], edges[k]);
-                    }
-                    lg = new AsUnmodifiableGraph<>(built);
+                    lg = build(lineEdgeCount);
                     lineGraph = lg;
                 }
             }
@@ -329,9 +330,19 @@ public final class Netlist {
         return circuit;
     }
 
-    /** The whole graph: lines and internal paths (unmodifiable view). */
+    /** The whole graph: lines and internal paths (unmodifiable view), built on first use. */
     public Graph<NetNode, NetEdge> graph() {
-        return graph;
+        Graph<NetNode, NetEdge> g = graph;
+        if (g == null) {
+            synchronized (this) {
+                g = graph;
+                if (g == null) {
+                    g = build(edges.length);
+                    graph = g;
+                }
+            }
+        }
+        return g;
     }
 
     /** Hydraulic ports with no line attached, in drawing order. */
@@ -347,7 +358,7 @@ public final class Netlist {
 
     /** Connected sub-networks through lines and internal paths; each set in graph order (copies). */
     public List<Set<NetNode>> subNetworks() {
-        return copy(new ConnectivityInspector<>(graph).connectedSets());
+        return copy(new ConnectivityInspector<>(graph()).connectedSets());
     }
 
     /** Nets: nodes joined by lines and junctions alone (copies); a lone unconnected port is a net of its own. */
@@ -362,10 +373,11 @@ public final class Netlist {
 
     /** A path with the fewest edges between two nodes through lines and internal paths, if any. */
     public Optional<GraphPath<NetNode, NetEdge>> path(NetNode from, NetNode to) {
-        if (!graph.containsVertex(from) || !graph.containsVertex(to)) {
-            throw new IllegalArgumentException("no such node: " + (graph.containsVertex(from) ? to : from));
+        Graph<NetNode, NetEdge> g = graph();
+        if (!g.containsVertex(from) || !g.containsVertex(to)) {
+            throw new IllegalArgumentException("no such node: " + (g.containsVertex(from) ? to : from));
         }
-        return Optional.ofNullable(new BFSShortestPath<>(graph).getPath(from, to));
+        return Optional.ofNullable(new BFSShortestPath<>(g).getPath(from, to));
     }
 
     /** The reservoir ports, which sit at the reference (zero gauge) pressure. */
@@ -379,12 +391,12 @@ public final class Netlist {
 
     /** Nodes with no path to any reservoir port: their pressure is not fixed by the network. */
     public Set<NetNode> nodesWithoutReservoir() {
-        ConnectivityInspector<NetNode, NetEdge> ci = new ConnectivityInspector<>(graph);
+        ConnectivityInspector<NetNode, NetEdge> ci = new ConnectivityInspector<>(graph());
         Set<NetNode> reached = new LinkedHashSet<>();
         for (NetNode.Port r : reservoirPorts()) {
             reached.addAll(ci.connectedSetOf(r));
         }
-        Set<NetNode> out = new LinkedHashSet<>(graph.vertexSet());
+        Set<NetNode> out = new LinkedHashSet<>(graph().vertexSet());
         out.removeAll(reached);
         return Collections.unmodifiableSet(out);
     }
