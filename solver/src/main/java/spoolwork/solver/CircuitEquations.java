@@ -4,6 +4,7 @@ import java.util.AbstractMap;
 import java.util.ArrayList;
 import java.util.Collections;
 import java.util.LinkedHashMap;
+import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
@@ -410,14 +411,20 @@ final class CircuitEquations {
         }
     }
 
+    private final Map<List<Object>, SpoolPosition> positions = new HashMap<>();
+
     private void directional(Component c, List<Element> es) {
         String want = state.positionOf(c.id());
-        SpoolPosition pos = null;
-        for (SpoolPosition sp : c.type().spoolPositions(c.options())) {
-            if (sp.name().equals(want)) {
-                pos = sp;
+        // a position depends on the valve's type, options and name only; circuits repeat valves a lot
+        SpoolPosition pos = positions.computeIfAbsent(java.util.Arrays.asList(c.type(), c.options(), want), key -> {
+            SpoolPosition found = null;
+            for (SpoolPosition sp : c.type().spoolPositions(c.options())) {
+                if (sp.name().equals(want)) {
+                    found = sp;
+                }
             }
-        }
+            return found;
+        });
         if (pos == null) {
             throw new IllegalStateException(c.tag() + " has no spool position " + want);
         }
