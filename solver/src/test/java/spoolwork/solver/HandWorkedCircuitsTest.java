@@ -218,6 +218,9 @@ class HandWorkedCircuitsTest {
         Solution s = solve(c);
         assertTrue(s.diagnostics().stream().anyMatch(d -> d.message().contains("hydraulically locked")
                 && d.elements().contains("C1")));
+        // the trapped oil is reported once, as the lock, not again as a part with no path to the reservoir
+        assertTrue(s.diagnostics().stream().noneMatch(d -> d.message().contains("no path to the reservoir")),
+                () -> s.diagnostics().toString());
         // Spool leakage 1e-14 m³/(s·Pa) on P→A, P→B, A→T, B→T at about 160 bar moves a few times
         // 1e-7 m³/s, so the piston creeps at most G·p/A_ann ≈ 1e-14·160e5/2e-3 ≈ 1e-4 m/s.
         assertTrue(Math.abs(s.value("C1", "velocity_mps")) < 1e-4, "creeps by leakage only");

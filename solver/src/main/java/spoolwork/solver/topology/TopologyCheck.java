@@ -88,10 +88,12 @@ public final class TopologyCheck {
 
     public List<Diagnostic> run() {
         List<Diagnostic> out = new ArrayList<>();
+        List<Diagnostic> lockedOut = new ArrayList<>();
+        locked(lockedOut);
         unconnected(out);
         floating(out);
         pumps(out);
-        locked(out);
+        out.addAll(lockedOut);
         return out;
     }
 
@@ -139,12 +141,15 @@ public final class TopologyCheck {
             }
         }
         for (List<Integer> members : subs.values()) {
-            // a part made of unconnected ports alone has had its warning already
+            // a part made of unconnected ports alone has had its warning already, and so has a part that
+            // traps the oil of a locked actuator (its caution says more)
             boolean lone = true;
+            boolean holdsLocked = false;
             for (int i : members) {
                 lone &= nodes[i] instanceof NetNode.Port && netlist.lineDegree(i) == 0;
+                holdsLocked |= trappedNode[i];
             }
-            if (lone) {
+            if (lone || holdsLocked) {
                 continue;
             }
             List<NetNode> sub = new ArrayList<>(members.size());
@@ -252,7 +257,11 @@ public final class TopologyCheck {
         }
     }
 
+    /** Ports of actuators that {@link #locked} found holding their load by trapped oil. */
+    private boolean[] trappedNode;
+
     private void locked(List<Diagnostic> out) {
+        trappedNode = new boolean[nodes.length];
         int[] label = parts(true);
         boolean[] escape = partsWith(label, Set.of(ComponentType.RESERVOIR, ComponentType.FIXED_PUMP,
                 ComponentType.COMPENSATED_PUMP, ComponentType.ACCUMULATOR), null);
@@ -266,8 +275,10 @@ public final class TopologyCheck {
             }
             List<String> trapped = new ArrayList<>();
             for (PortSpec ps : c.type().ports()) {
-                if (!ps.mechanical() && !escape[label[netlist.portIndex(c.id(), ps.name())]]) {
+                int node = ps.mechanical() ? -1 : netlist.portIndex(c.id(), ps.name());
+                if (node >= 0 && !escape[label[node]]) {
                     trapped.add(ps.name());
+                    trappedNode[node] = true;
                 }
             }
             if (!trapped.isEmpty()) {
