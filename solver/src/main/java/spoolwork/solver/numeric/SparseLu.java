@@ -45,6 +45,10 @@ final class SparseLu {
     private final int[] prow;
     private boolean factored;
     private int fresh;
+    /** Values of the last successful factorisation, to find the columns whose factors can change. */
+    private final double[] last;
+    /** changed[k]: column k of L and U was recomputed by the running refactorisation. */
+    private final boolean[] changed;
 
     private final double[] x;
     private final int[] xi;
@@ -99,6 +103,8 @@ final class SparseLu {
         stack = new int[n];
         next = new int[n];
         mark = new int[n];
+        last = new double[ap[n]];
+        changed = new boolean[n];
         int guess = 4 * ap[n] + n;
         lp = new int[n + 1];
         up = new int[n + 1];
@@ -142,10 +148,14 @@ final class SparseLu {
         if (factored) {
             from = refactor(values);
             if (from < 0) {
+                System.arraycopy(values, 0, last, 0, ap[n]);
                 return true;
             }
         }
         factored = pivotingFactor(values, from);
+        if (factored) {
+            System.arraycopy(values, 0, last, 0, ap[n]);
+        }
         return factored;
     }
 
@@ -297,13 +307,36 @@ final class SparseLu {
     }
 
     /**
-     * Numeric factorisation along the stored pivot order and patterns.
+     * Numeric factorisation along the stored pivot order and patterns. Column k of L and U is a function of
+     * column Q[k] of A and of the columns of L named in the pattern of U(:,k); when none of these changed
+     * since the last factorisation, the column is left as it is (it passed the pivot test with the same
+     * numbers then).
      *
      * @return −1 when done, else the first column whose pivot failed the test
      */
     private int refactor(double[] values) {
         for (int k = 0; k < n; k++) {
             int col = q[k];
+            int diag = up[k + 1] - 1;
+            boolean ch = false;
+            for (int p = ap[col]; p < ap[col + 1]; p++) {
+                if (values[p] != last[p]) {
+                    ch = true;
+                    break;
+                }
+            }
+            if (!ch) {
+                for (int p = up[k]; p < diag; p++) {
+                    if (changed[ui[p]]) {
+                        ch = true;
+                        break;
+                    }
+                }
+            }
+            changed[k] = ch;
+            if (!ch) {
+                continue;
+            }
             for (int p = up[k]; p < up[k + 1]; p++) {
                 x[ui[p]] = 0;
             }
@@ -315,7 +348,6 @@ final class SparseLu {
                 x[pinv[ai[p]]] = values[p];
                 big = Math.max(big, Math.abs(values[p]));
             }
-            int diag = up[k + 1] - 1;
             for (int p = up[k]; p < diag; p++) {
                 int j = ui[p];
                 double xj = x[j];
