@@ -55,6 +55,7 @@ final class LinearStep implements Jacobian {
 
     void clear() {
         current.count = 0;
+        current.fitted = false;
     }
 
     /** Jacobian entries in the order they arrived; entries for the same place are summed later. */
@@ -63,6 +64,8 @@ final class LinearStep implements Jacobian {
         int[] cols;
         double[] vals;
         int count;
+        /** True while no entry has been added since the pattern was last found to fit the plan. */
+        boolean fitted;
 
         Triplets(int capacity) {
             rows = new int[capacity];
@@ -75,6 +78,7 @@ final class LinearStep implements Jacobian {
             if (row < 0 || col < 0) {
                 return;
             }
+            fitted = false;
             if (count == rows.length) {
                 rows = Arrays.copyOf(rows, count * 2);
                 cols = Arrays.copyOf(cols, count * 2);
@@ -103,6 +107,7 @@ final class LinearStep implements Jacobian {
      */
     Jacobian spare() {
         trial.count = 0;
+        trial.fitted = false;
         return trial;
     }
 
@@ -112,6 +117,7 @@ final class LinearStep implements Jacobian {
         current = trial;
         trial = t;
         trial.count = 0;
+        trial.fitted = false;
     }
 
     @Override
@@ -185,28 +191,42 @@ final class LinearStep implements Jacobian {
         int[] cols = current.cols;
         double[] vals = current.vals;
         int count = current.count;
-        if (plan == null || !plan.fits(rows, cols, count)) {
+        // entries only rewritten through set() since the last check keep their places
+        if (plan == null || !(current.fitted && plan.checked == current) && !plan.fits(rows, cols, count)) {
             plan = Plan.make(n, eliminable, delayed, rows, cols, count, bandOrdering);
             if (plan == null) {
+                current.fitted = false;
                 return solveSparseFull(rhs, rowScale, colScale);
             }
         }
+        current.fitted = true;
         Plan pl = plan;
+        pl.checked = current;
         double[] pivot = pl.pivot;
         double[] rowVal = pl.rowVal;
         double[] colVal = pl.colVal;
         double[] nz = pl.values;
         Arrays.fill(pivot, 0);
         Arrays.fill(nz, 0);
-        for (int k = 0; k < count; k++) {
-            double v = vals[k] * colScale[cols[k]] / rowScale[rows[k]];
-            int d = pl.dest[k];
-            switch (pl.role[k]) {
-                case Plan.PIVOT -> pivot[rows[k]] += v;
-                case Plan.ROW -> rowVal[d] = v;
-                case Plan.COL -> colVal[d] = v;
-                default -> nz[d] += v;
-            }
+        // the entries split by role once in the plan, so that each loop does one thing
+        int[] idx = pl.byRole;
+        int[] dst = pl.byRoleDest;
+        for (int t = 0, end = pl.roleEnd[Plan.KEPT]; t < end; t++) {
+            int k = idx[t];
+            nz[dst[t]] += vals[k] * colScale[cols[k]] / rowScale[rows[k]];
+        }
+        for (int t = pl.roleEnd[Plan.KEPT], end = pl.roleEnd[Plan.PIVOT]; t < end; t++) {
+            int k = idx[t];
+            int r = rows[k];
+            pivot[r] += vals[k] * colScale[r] / rowScale[r];
+        }
+        for (int t = pl.roleEnd[Plan.PIVOT], end = pl.roleEnd[Plan.ROW]; t < end; t++) {
+            int k = idx[t];
+            rowVal[dst[t]] = vals[k] * colScale[cols[k]] / rowScale[rows[k]];
+        }
+        for (int t = pl.roleEnd[Plan.ROW], end = pl.roleEnd[Plan.COL]; t < end; t++) {
+            int k = idx[t];
+            colVal[dst[t]] = vals[k] * colScale[cols[k]] / rowScale[rows[k]];
         }
         double[] b = pl.b;
         System.arraycopy(rhs, 0, b, 0, n);
@@ -272,6 +292,12 @@ final class LinearStep implements Jacobian {
         int[] place;
         byte[] role;
         int[] dest;
+        /** Entry indices grouped by role (kept, pivot, row, column), the group ends and each entry's dest. */
+        int[] byRole;
+        int[] byRoleDest;
+        int[] roleEnd;
+        /** The entries last found to fit this plan (valid while they report no additions). */
+        Triplets checked;
         int[] elim;
         int[] rowStart;
         int[] rowCol;
@@ -478,6 +504,21 @@ final class LinearStep implements Jacobian {
             p.fill = new int[fills];
             for (int q = 0; q < fills; q++) {
                 p.fill[q] = p.position(inverse[pr[keptEntries + q]], inverse[pc[keptEntries + q]]);
+            }
+            p.roleEnd = new int[4];
+            for (int k = 0; k < count; k++) {
+                p.roleEnd[p.role[k]]++;
+            }
+            for (int r = 1; r < 4; r++) {
+                p.roleEnd[r] += p.roleEnd[r - 1];
+            }
+            int[] at = {0, p.roleEnd[KEPT], p.roleEnd[PIVOT], p.roleEnd[ROW]};
+            p.byRole = new int[count];
+            p.byRoleDest = new int[count];
+            for (int k = 0; k < count; k++) {
+                int slot = at[p.role[k]]++;
+                p.byRole[slot] = k;
+                p.byRoleDest[slot] = p.dest[k];
             }
             return p;
         }
