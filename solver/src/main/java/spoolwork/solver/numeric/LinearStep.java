@@ -318,24 +318,6 @@ final class LinearStep implements Jacobian {
         double[] y;
         SparseLu lu;
 
-        /** Index of entry (row, col) in the compressed columns; the entry must be in the pattern. */
-        int position(int row, int col) {
-            int lo = colPtr[col];
-            int hi = colPtr[col + 1] - 1;
-            while (lo <= hi) {
-                int mid = (lo + hi) >>> 1;
-                int r = rowIdx[mid];
-                if (r < row) {
-                    lo = mid + 1;
-                } else if (r > row) {
-                    hi = mid - 1;
-                } else {
-                    return mid;
-                }
-            }
-            throw new IllegalStateException("entry (" + row + ", " + col + ") is not in the pattern");
-        }
-
         boolean fits(int[] rows, int[] cols, int count) {
             if (count != rowsSeen.length) {
                 return false;
@@ -451,7 +433,8 @@ final class LinearStep implements Jacobian {
                 p.place[i] = kept[i] < 0 ? -1 : inverse[kept[i]];
             }
             // unique (column, row) pairs in the new numbering, as CSC with rows sorted in each column:
-            // bucket the entries by column, then sort each short column and drop repeats
+            // bucket the entries by column, then sort each short column and drop repeats; each entry's place
+            // in the compressed columns is noted on the way
             int[] start = new int[m + 1];
             for (int t = 0; t < total; t++) {
                 start[inverse[pc[t]] + 1]++;
@@ -461,33 +444,41 @@ final class LinearStep implements Jacobian {
             }
             int[] next = Arrays.copyOf(start, m);
             int[] bucketRow = new int[total];
+            int[] bucketEntry = new int[total];
             for (int t = 0; t < total; t++) {
-                bucketRow[next[inverse[pc[t]]]++] = inverse[pr[t]];
+                int slot = next[inverse[pc[t]]]++;
+                bucketRow[slot] = inverse[pr[t]];
+                bucketEntry[slot] = t;
             }
             p.colPtr = new int[m + 1];
+            int[] rowIdx = new int[total];
+            int[] placeOf = new int[total];
             int unique = 0;
             for (int c = 0; c < m; c++) {
                 int lo = start[c];
                 int hi = start[c + 1];
                 for (int i = lo + 1; i < hi; i++) {
                     int v = bucketRow[i];
+                    int w = bucketEntry[i];
                     int j = i - 1;
                     while (j >= lo && bucketRow[j] > v) {
                         bucketRow[j + 1] = bucketRow[j];
+                        bucketEntry[j + 1] = bucketEntry[j];
                         j--;
                     }
                     bucketRow[j + 1] = v;
+                    bucketEntry[j + 1] = w;
                 }
-                int from = unique;
+                p.colPtr[c] = unique;
                 for (int i = lo; i < hi; i++) {
                     if (i == lo || bucketRow[i] != bucketRow[i - 1]) {
-                        bucketRow[unique++] = bucketRow[i];
+                        rowIdx[unique++] = bucketRow[i];
                     }
+                    placeOf[bucketEntry[i]] = unique - 1;
                 }
-                p.colPtr[c] = from;
             }
             p.colPtr[m] = unique;
-            p.rowIdx = Arrays.copyOf(bucketRow, unique);
+            p.rowIdx = Arrays.copyOf(rowIdx, unique);
             p.values = new double[unique];
             p.pivot = new double[n];
             p.rowVal = new double[p.rowSlots];
@@ -497,14 +488,10 @@ final class LinearStep implements Jacobian {
             int t = 0;
             for (int k = 0; k < count; k++) {
                 if (p.role[k] == KEPT) {
-                    p.dest[k] = p.position(inverse[pr[t]], inverse[pc[t]]);
-                    t++;
+                    p.dest[k] = placeOf[t++];
                 }
             }
-            p.fill = new int[fills];
-            for (int q = 0; q < fills; q++) {
-                p.fill[q] = p.position(inverse[pr[keptEntries + q]], inverse[pc[keptEntries + q]]);
-            }
+            p.fill = Arrays.copyOfRange(placeOf, keptEntries, keptEntries + fills);
             p.roleEnd = new int[4];
             for (int k = 0; k < count; k++) {
                 p.roleEnd[p.role[k]]++;
