@@ -319,15 +319,8 @@ final class LinearStep implements Jacobian {
         SparseLu lu;
 
         boolean fits(int[] rows, int[] cols, int count) {
-            if (count != rowsSeen.length) {
-                return false;
-            }
-            for (int k = 0; k < count; k++) {
-                if (rows[k] != rowsSeen[k] || cols[k] != colsSeen[k]) {
-                    return false;
-                }
-            }
-            return true;
+            return count == rowsSeen.length && Arrays.equals(rows, 0, count, rowsSeen, 0, count)
+                    && Arrays.equals(cols, 0, count, colsSeen, 0, count);
         }
 
         static Plan make(int n, boolean[] eliminable, boolean[] delayed, int[] rows, int[] cols, int count,
