@@ -208,25 +208,23 @@ final class LinearStep implements Jacobian {
         double[] nz = pl.values;
         Arrays.fill(pivot, 0);
         Arrays.fill(nz, 0);
-        // the entries split by role once in the plan, so that each loop does one thing
+        // the entries split by role once in the plan, so that each loop does one thing; the factor
+        // colScale/rowScale of each entry is kept while the scales stay the same
         int[] idx = pl.byRole;
         int[] dst = pl.byRoleDest;
+        double[] sc = pl.scales(rows, cols, rowScale, colScale);
         for (int t = 0, end = pl.roleEnd[Plan.KEPT]; t < end; t++) {
-            int k = idx[t];
-            nz[dst[t]] += vals[k] * colScale[cols[k]] / rowScale[rows[k]];
+            nz[dst[t]] += vals[idx[t]] * sc[t];
         }
         for (int t = pl.roleEnd[Plan.KEPT], end = pl.roleEnd[Plan.PIVOT]; t < end; t++) {
             int k = idx[t];
-            int r = rows[k];
-            pivot[r] += vals[k] * colScale[r] / rowScale[r];
+            pivot[rows[k]] += vals[k] * sc[t];
         }
         for (int t = pl.roleEnd[Plan.PIVOT], end = pl.roleEnd[Plan.ROW]; t < end; t++) {
-            int k = idx[t];
-            rowVal[dst[t]] = vals[k] * colScale[cols[k]] / rowScale[rows[k]];
+            rowVal[dst[t]] = vals[idx[t]] * sc[t];
         }
         for (int t = pl.roleEnd[Plan.ROW], end = pl.roleEnd[Plan.COL]; t < end; t++) {
-            int k = idx[t];
-            colVal[dst[t]] = vals[k] * colScale[cols[k]] / rowScale[rows[k]];
+            colVal[dst[t]] = vals[idx[t]] * sc[t];
         }
         double[] b = pl.b;
         System.arraycopy(rhs, 0, b, 0, n);
@@ -298,6 +296,23 @@ final class LinearStep implements Jacobian {
         int[] roleEnd;
         /** The entries last found to fit this plan (valid while they report no additions). */
         Triplets checked;
+        /** colScale[col] / rowScale[row] of each entry in byRole order, for the scales last seen. */
+        private double[] byRoleScale;
+        private double[] rowScaleSeen;
+        private double[] colScaleSeen;
+
+        double[] scales(int[] rows, int[] cols, double[] rowScale, double[] colScale) {
+            if (byRoleScale == null || !Arrays.equals(rowScale, rowScaleSeen) || !Arrays.equals(colScale, colScaleSeen)) {
+                rowScaleSeen = rowScale.clone();
+                colScaleSeen = colScale.clone();
+                byRoleScale = new double[byRole.length];
+                for (int t = 0; t < byRole.length; t++) {
+                    int k = byRole[t];
+                    byRoleScale[t] = colScale[cols[k]] / rowScale[rows[k]];
+                }
+            }
+            return byRoleScale;
+        }
         int[] elim;
         int[] rowStart;
         int[] rowCol;
