@@ -55,6 +55,7 @@ final class LinearStep implements Jacobian {
 
     void clear() {
         current.count = 0;
+        current.fitted = false;
     }
 
     /** Jacobian entries in the order they arrived; entries for the same place are summed later. */
@@ -63,6 +64,8 @@ final class LinearStep implements Jacobian {
         int[] cols;
         double[] vals;
         int count;
+        /** True while no entry has been added since the pattern was last found to fit the plan. */
+        boolean fitted;
 
         Triplets(int capacity) {
             rows = new int[capacity];
@@ -75,6 +78,7 @@ final class LinearStep implements Jacobian {
             if (row < 0 || col < 0) {
                 return;
             }
+            fitted = false;
             if (count == rows.length) {
                 rows = Arrays.copyOf(rows, count * 2);
                 cols = Arrays.copyOf(cols, count * 2);
@@ -103,6 +107,7 @@ final class LinearStep implements Jacobian {
      */
     Jacobian spare() {
         trial.count = 0;
+        trial.fitted = false;
         return trial;
     }
 
@@ -112,6 +117,7 @@ final class LinearStep implements Jacobian {
         current = trial;
         trial = t;
         trial.count = 0;
+        trial.fitted = false;
     }
 
     @Override
@@ -185,28 +191,40 @@ final class LinearStep implements Jacobian {
         int[] cols = current.cols;
         double[] vals = current.vals;
         int count = current.count;
-        if (plan == null || !plan.fits(rows, cols, count)) {
+        // entries only rewritten through set() since the last check keep their places
+        if (plan == null || !(current.fitted && plan.checked == current) && !plan.fits(rows, cols, count)) {
             plan = Plan.make(n, eliminable, delayed, rows, cols, count, bandOrdering);
             if (plan == null) {
+                current.fitted = false;
                 return solveSparseFull(rhs, rowScale, colScale);
             }
         }
+        current.fitted = true;
         Plan pl = plan;
+        pl.checked = current;
         double[] pivot = pl.pivot;
         double[] rowVal = pl.rowVal;
         double[] colVal = pl.colVal;
         double[] nz = pl.values;
         Arrays.fill(pivot, 0);
         Arrays.fill(nz, 0);
-        for (int k = 0; k < count; k++) {
-            double v = vals[k] * colScale[cols[k]] / rowScale[rows[k]];
-            int d = pl.dest[k];
-            switch (pl.role[k]) {
-                case Plan.PIVOT -> pivot[rows[k]] += v;
-                case Plan.ROW -> rowVal[d] = v;
-                case Plan.COL -> colVal[d] = v;
-                default -> nz[d] += v;
-            }
+        // the entries split by role once in the plan, so that each loop does one thing; the factor
+        // colScale/rowScale of each entry is kept while the scales stay the same
+        int[] idx = pl.byRole;
+        int[] dst = pl.byRoleDest;
+        double[] sc = pl.scales(rows, cols, rowScale, colScale);
+        for (int t = 0, end = pl.roleEnd[Plan.KEPT]; t < end; t++) {
+            nz[dst[t]] += vals[idx[t]] * sc[t];
+        }
+        for (int t = pl.roleEnd[Plan.KEPT], end = pl.roleEnd[Plan.PIVOT]; t < end; t++) {
+            int k = idx[t];
+            pivot[rows[k]] += vals[k] * sc[t];
+        }
+        for (int t = pl.roleEnd[Plan.PIVOT], end = pl.roleEnd[Plan.ROW]; t < end; t++) {
+            rowVal[dst[t]] = vals[idx[t]] * sc[t];
+        }
+        for (int t = pl.roleEnd[Plan.ROW], end = pl.roleEnd[Plan.COL]; t < end; t++) {
+            colVal[dst[t]] = vals[idx[t]] * sc[t];
         }
         double[] b = pl.b;
         System.arraycopy(rhs, 0, b, 0, n);
@@ -272,6 +290,29 @@ final class LinearStep implements Jacobian {
         int[] place;
         byte[] role;
         int[] dest;
+        /** Entry indices grouped by role (kept, pivot, row, column), the group ends and each entry's dest. */
+        int[] byRole;
+        int[] byRoleDest;
+        int[] roleEnd;
+        /** The entries last found to fit this plan (valid while they report no additions). */
+        Triplets checked;
+        /** colScale[col] / rowScale[row] of each entry in byRole order, for the scales last seen. */
+        private double[] byRoleScale;
+        private double[] rowScaleSeen;
+        private double[] colScaleSeen;
+
+        double[] scales(int[] rows, int[] cols, double[] rowScale, double[] colScale) {
+            if (byRoleScale == null || !Arrays.equals(rowScale, rowScaleSeen) || !Arrays.equals(colScale, colScaleSeen)) {
+                rowScaleSeen = rowScale.clone();
+                colScaleSeen = colScale.clone();
+                byRoleScale = new double[byRole.length];
+                for (int t = 0; t < byRole.length; t++) {
+                    int k = byRole[t];
+                    byRoleScale[t] = colScale[cols[k]] / rowScale[rows[k]];
+                }
+            }
+            return byRoleScale;
+        }
         int[] elim;
         int[] rowStart;
         int[] rowCol;
@@ -292,34 +333,9 @@ final class LinearStep implements Jacobian {
         double[] y;
         SparseLu lu;
 
-        /** Index of entry (row, col) in the compressed columns; the entry must be in the pattern. */
-        int position(int row, int col) {
-            int lo = colPtr[col];
-            int hi = colPtr[col + 1] - 1;
-            while (lo <= hi) {
-                int mid = (lo + hi) >>> 1;
-                int r = rowIdx[mid];
-                if (r < row) {
-                    lo = mid + 1;
-                } else if (r > row) {
-                    hi = mid - 1;
-                } else {
-                    return mid;
-                }
-            }
-            throw new IllegalStateException("entry (" + row + ", " + col + ") is not in the pattern");
-        }
-
         boolean fits(int[] rows, int[] cols, int count) {
-            if (count != rowsSeen.length) {
-                return false;
-            }
-            for (int k = 0; k < count; k++) {
-                if (rows[k] != rowsSeen[k] || cols[k] != colsSeen[k]) {
-                    return false;
-                }
-            }
-            return true;
+            return count == rowsSeen.length && Arrays.equals(rows, 0, count, rowsSeen, 0, count)
+                    && Arrays.equals(cols, 0, count, colsSeen, 0, count);
         }
 
         static Plan make(int n, boolean[] eliminable, boolean[] delayed, int[] rows, int[] cols, int count,
@@ -425,7 +441,8 @@ final class LinearStep implements Jacobian {
                 p.place[i] = kept[i] < 0 ? -1 : inverse[kept[i]];
             }
             // unique (column, row) pairs in the new numbering, as CSC with rows sorted in each column:
-            // bucket the entries by column, then sort each short column and drop repeats
+            // bucket the entries by column, then sort each short column and drop repeats; each entry's place
+            // in the compressed columns is noted on the way
             int[] start = new int[m + 1];
             for (int t = 0; t < total; t++) {
                 start[inverse[pc[t]] + 1]++;
@@ -435,33 +452,41 @@ final class LinearStep implements Jacobian {
             }
             int[] next = Arrays.copyOf(start, m);
             int[] bucketRow = new int[total];
+            int[] bucketEntry = new int[total];
             for (int t = 0; t < total; t++) {
-                bucketRow[next[inverse[pc[t]]]++] = inverse[pr[t]];
+                int slot = next[inverse[pc[t]]]++;
+                bucketRow[slot] = inverse[pr[t]];
+                bucketEntry[slot] = t;
             }
             p.colPtr = new int[m + 1];
+            int[] rowIdx = new int[total];
+            int[] placeOf = new int[total];
             int unique = 0;
             for (int c = 0; c < m; c++) {
                 int lo = start[c];
                 int hi = start[c + 1];
                 for (int i = lo + 1; i < hi; i++) {
                     int v = bucketRow[i];
+                    int w = bucketEntry[i];
                     int j = i - 1;
                     while (j >= lo && bucketRow[j] > v) {
                         bucketRow[j + 1] = bucketRow[j];
+                        bucketEntry[j + 1] = bucketEntry[j];
                         j--;
                     }
                     bucketRow[j + 1] = v;
+                    bucketEntry[j + 1] = w;
                 }
-                int from = unique;
+                p.colPtr[c] = unique;
                 for (int i = lo; i < hi; i++) {
                     if (i == lo || bucketRow[i] != bucketRow[i - 1]) {
-                        bucketRow[unique++] = bucketRow[i];
+                        rowIdx[unique++] = bucketRow[i];
                     }
+                    placeOf[bucketEntry[i]] = unique - 1;
                 }
-                p.colPtr[c] = from;
             }
             p.colPtr[m] = unique;
-            p.rowIdx = Arrays.copyOf(bucketRow, unique);
+            p.rowIdx = Arrays.copyOf(rowIdx, unique);
             p.values = new double[unique];
             p.pivot = new double[n];
             p.rowVal = new double[p.rowSlots];
@@ -471,13 +496,24 @@ final class LinearStep implements Jacobian {
             int t = 0;
             for (int k = 0; k < count; k++) {
                 if (p.role[k] == KEPT) {
-                    p.dest[k] = p.position(inverse[pr[t]], inverse[pc[t]]);
-                    t++;
+                    p.dest[k] = placeOf[t++];
                 }
             }
-            p.fill = new int[fills];
-            for (int q = 0; q < fills; q++) {
-                p.fill[q] = p.position(inverse[pr[keptEntries + q]], inverse[pc[keptEntries + q]]);
+            p.fill = Arrays.copyOfRange(placeOf, keptEntries, keptEntries + fills);
+            p.roleEnd = new int[4];
+            for (int k = 0; k < count; k++) {
+                p.roleEnd[p.role[k]]++;
+            }
+            for (int r = 1; r < 4; r++) {
+                p.roleEnd[r] += p.roleEnd[r - 1];
+            }
+            int[] at = {0, p.roleEnd[KEPT], p.roleEnd[PIVOT], p.roleEnd[ROW]};
+            p.byRole = new int[count];
+            p.byRoleDest = new int[count];
+            for (int k = 0; k < count; k++) {
+                int slot = at[p.role[k]]++;
+                p.byRole[slot] = k;
+                p.byRoleDest[slot] = p.dest[k];
             }
             return p;
         }

@@ -15,7 +15,9 @@ import java.util.Arrays;
  * and without allocating. A refactorisation falls back to pivoting when a kept pivot no longer passes the
  * same threshold test against the candidates of its column, so the bound on the entries of L
  * (|l| ≤ 1/{@link #PIVOT_TOLERANCE}) holds in both cases; the columns before the failed one have passed
- * the test with the new values and are kept, the search starts again at the failed column.
+ * the test with the new values and are kept, the search starts again at the failed column. Both the
+ * refactorisation and that search leave alone the columns whose inputs did not change since the last
+ * factorisation (see {@link #refactor} and {@link #pivotingFactor}).
  *
  * <p>A matrix is reported singular ({@code false}) when a column has no usable pivot: every candidate is
  * zero, or the largest is below {@link #SINGULAR_TOLERANCE} times the largest magnitude met in that
@@ -45,6 +47,20 @@ final class SparseLu {
     private final int[] prow;
     private boolean factored;
     private int fresh;
+    /** Values of the last successful factorisation, to find the columns whose factors can change. */
+    private final double[] last;
+    /** changed[k]: column k of L and U was recomputed by the running refactorisation. */
+    private final boolean[] changed;
+    /** same[k]: column k of L and U (and its pivot row) is the one of the factorisation before. */
+    private final boolean[] same;
+    // the columns from the failed one on of the factorisation before, kept while the search runs
+    private int[] oldLp;
+    private int[] oldUp;
+    private int[] oldProw;
+    private int[] oldLi;
+    private double[] oldLx;
+    private int[] oldUi;
+    private double[] oldUx;
 
     private final double[] x;
     private final int[] xi;
@@ -99,6 +115,9 @@ final class SparseLu {
         stack = new int[n];
         next = new int[n];
         mark = new int[n];
+        last = new double[ap[n]];
+        changed = new boolean[n];
+        same = new boolean[n];
         int guess = 4 * ap[n] + n;
         lp = new int[n + 1];
         up = new int[n + 1];
@@ -142,19 +161,32 @@ final class SparseLu {
         if (factored) {
             from = refactor(values);
             if (from < 0) {
+                System.arraycopy(values, 0, last, 0, ap[n]);
                 return true;
             }
         }
         factored = pivotingFactor(values, from);
+        if (factored) {
+            System.arraycopy(values, 0, last, 0, ap[n]);
+        }
         return factored;
     }
 
     /**
      * Left-looking LU with threshold partial pivoting from column {@code from} on; finds the patterns of L
      * and U. Columns before {@code from} must hold a valid factorisation of the same values.
+     *
+     * <p>After a failed refactorisation a later column is taken over from the factorisation before when the
+     * search would only find it again: its column of A is unchanged, every column of L it is updated by (the
+     * pattern of U) was taken over or kept unchanged too, and the rows of its column of L are still without
+     * a pivot. Then the reach, the numbers and so the pivot choice are those of before.
      */
     private boolean pivotingFactor(double[] values, int from) {
         fresh++;
+        boolean reuse = factored;
+        if (reuse) {
+            saveOld(from);
+        }
         Arrays.fill(x, 0);
         if (from == 0) {
             Arrays.fill(pinv, -1);
@@ -183,6 +215,23 @@ final class SparseLu {
                 ux = Arrays.copyOf(ux, size);
             }
             int col = q[k];
+            if (reuse && unchangedSince(values, k)) {
+                int base = oldLp[from];
+                for (int p = oldLp[k]; p < oldLp[k + 1]; p++) {
+                    li[lnz] = oldProw[oldLi[p - base]];
+                    lx[lnz++] = oldLx[p - base];
+                }
+                int ubase = oldUp[from];
+                for (int p = oldUp[k]; p < oldUp[k + 1]; p++) {
+                    ui[unz] = oldUi[p - ubase];
+                    ux[unz++] = oldUx[p - ubase];
+                }
+                pinv[oldProw[k]] = k;
+                prow[k] = oldProw[k];
+                same[k] = true;
+                continue;
+            }
+            same[k] = false;
             int top = reach(col);
             double big = 0;
             for (int p = ap[col]; p < ap[col + 1]; p++) {
@@ -248,6 +297,66 @@ final class SparseLu {
         return true;
     }
 
+    /** Keeps columns from..n−1 of the current factors, and marks the columns before that refactor left alone. */
+    private void saveOld(int from) {
+        if (oldLp == null) {
+            oldLp = new int[n + 1];
+            oldUp = new int[n + 1];
+            oldProw = new int[n];
+        }
+        System.arraycopy(lp, 0, oldLp, 0, n + 1);
+        System.arraycopy(up, 0, oldUp, 0, n + 1);
+        System.arraycopy(prow, 0, oldProw, 0, n);
+        saveFrom = from;
+        int ln = lp[n] - lp[from];
+        int un = up[n] - up[from];
+        if (oldLi == null || oldLi.length < ln) {
+            oldLi = new int[Math.max(ln, li.length)];
+            oldLx = new double[oldLi.length];
+        }
+        if (oldUi == null || oldUi.length < un) {
+            oldUi = new int[Math.max(un, ui.length)];
+            oldUx = new double[oldUi.length];
+        }
+        System.arraycopy(li, lp[from], oldLi, 0, ln);
+        System.arraycopy(lx, lp[from], oldLx, 0, ln);
+        System.arraycopy(ui, up[from], oldUi, 0, un);
+        System.arraycopy(ux, up[from], oldUx, 0, un);
+        for (int k = 0; k < from; k++) {
+            same[k] = !changed[k];
+        }
+    }
+
+    /**
+     * True when column k of the factorisation before would be found again at this point of the search: see
+     * {@link #pivotingFactor}. pinv holds the pivots chosen so far.
+     */
+    private boolean unchangedSince(double[] values, int k) {
+        int col = q[k];
+        for (int p = ap[col]; p < ap[col + 1]; p++) {
+            if (values[p] != last[p]) {
+                return false;
+            }
+        }
+        int ubase = oldUp[saveFrom];
+        int diag = oldUp[k + 1] - 1;
+        for (int p = oldUp[k]; p < diag; p++) {
+            if (!same[oldUi[p - ubase]]) {
+                return false;
+            }
+        }
+        int base = oldLp[saveFrom];
+        for (int p = oldLp[k]; p < oldLp[k + 1]; p++) {
+            if (pinv[oldProw[oldLi[p - base]]] >= 0) {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    /** The column from which the factorisation before is kept in the old arrays. */
+    private int saveFrom;
+
     /**
      * Rows reachable from the pattern of A(:,col) through the columns of L found so far, in topological
      * order in xi[top..n−1] (non-recursive depth-first search).
@@ -297,13 +406,36 @@ final class SparseLu {
     }
 
     /**
-     * Numeric factorisation along the stored pivot order and patterns.
+     * Numeric factorisation along the stored pivot order and patterns. Column k of L and U is a function of
+     * column Q[k] of A and of the columns of L named in the pattern of U(:,k); when none of these changed
+     * since the last factorisation, the column is left as it is (it passed the pivot test with the same
+     * numbers then).
      *
      * @return −1 when done, else the first column whose pivot failed the test
      */
     private int refactor(double[] values) {
         for (int k = 0; k < n; k++) {
             int col = q[k];
+            int diag = up[k + 1] - 1;
+            boolean ch = false;
+            for (int p = ap[col]; p < ap[col + 1]; p++) {
+                if (values[p] != last[p]) {
+                    ch = true;
+                    break;
+                }
+            }
+            if (!ch) {
+                for (int p = up[k]; p < diag; p++) {
+                    if (changed[ui[p]]) {
+                        ch = true;
+                        break;
+                    }
+                }
+            }
+            changed[k] = ch;
+            if (!ch) {
+                continue;
+            }
             for (int p = up[k]; p < up[k + 1]; p++) {
                 x[ui[p]] = 0;
             }
@@ -315,7 +447,6 @@ final class SparseLu {
                 x[pinv[ai[p]]] = values[p];
                 big = Math.max(big, Math.abs(values[p]));
             }
-            int diag = up[k + 1] - 1;
             for (int p = up[k]; p < diag; p++) {
                 int j = ui[p];
                 double xj = x[j];
