@@ -167,6 +167,8 @@ public final class Newton {
 
     /** Most rounds of side changes within one Newton step. */
     static final int MAX_SIDE_ROUNDS = 8;
+    /** Rounds in which every wrong side changes at once; later rounds change only the worst one. */
+    static final int BULK_ROUNDS = 3;
     /** Most full steps in a row that may raise the merit before going back to the best point. */
     static final int MAX_RELAXED = 6;
 
@@ -206,6 +208,11 @@ public final class Newton {
             }
             for (int i = 0; i < n; i++) {
                 dx[i] = y[i] * colScale[i];
+            }
+            // after a few rounds of changing every wrong side at once, change one at a time: rows that
+            // depend on each other (a flow control feeding a stuck cylinder) can otherwise swap for ever
+            if (round >= BULK_ROUNDS) {
+                onlyWorst = true;
             }
             if (s.switchSides(dx, onlyWorst) == 0) {
                 return y;
