@@ -147,6 +147,10 @@ public final class Newton {
                 searchOnly = false;
             }
             if (within(s, f) && alpha * stepNorm <= STEP_TOLERANCE) {
+                if (within(s, f, POLISHED)) {
+                    // already far inside the tolerance: one more step would change only round-off
+                    return new Result(x, true, it + 1, null, -1);
+                }
                 double[] last = lin.solve(negScaled(s, f, rowScale), rowScale, colScale);
                 return new Result(last == null ? x : polish(s, x, f, last, colScale, rowScale), true, it + 2, null, -1);
             }
@@ -260,13 +264,24 @@ public final class Newton {
 
     /** True when every row is within its tolerance. */
     public static boolean within(NonlinearSystem s, double[] f) {
+        return within(s, f, 1);
+    }
+
+    /** True when every row is within the given fraction of its tolerance. */
+    static boolean within(NonlinearSystem s, double[] f, double fraction) {
         for (int i = 0; i < f.length; i++) {
-            if (!(Math.abs(f[i]) <= s.rowTolerance(i))) {
+            if (!(Math.abs(f[i]) <= fraction * s.rowTolerance(i))) {
                 return false;
             }
         }
         return true;
     }
+
+    /**
+     * Fraction of the tolerance below which a converged point is not polished: its rows are then at
+     * 1e-12 of the circuit's flow and pressure, so balances computed from it hold to about that already.
+     */
+    static final double POLISHED = 1e-3;
 
     private static int worst(NonlinearSystem s, double[] f) {
         int w = -1;
