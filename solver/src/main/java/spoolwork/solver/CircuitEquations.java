@@ -64,10 +64,10 @@ final class CircuitEquations {
     /** Representative names of node indices. */
     final List<String> nodeNames = new ArrayList<>();
     /** Elements of each component id. */
-    final Map<String, List<Element>> elementsOf = new LinkedHashMap<>();
+    final Map<String, List<Element>> elementsOf;
     /** Loss-bearing line elements by line id. */
-    final Map<String, Branch> lineBranches = new LinkedHashMap<>();
-    final Map<String, LineLaw> lineLaws = new LinkedHashMap<>();
+    final Map<String, Branch> lineBranches;
+    final Map<String, LineLaw> lineLaws;
     final Map<String, Pump> pumps = new LinkedHashMap<>();
     final Map<String, Double> pumpSpeeds = new LinkedHashMap<>();
     final NodeConductance nodes;
@@ -83,15 +83,16 @@ final class CircuitEquations {
         this.lineStart = new int[lineCount];
         this.lineEnd = new int[lineCount];
         this.lineBranch = new Branch[lineCount];
-        this.componentElements = new ArrayList<>(circuit.components().size());
+        int componentCount = circuit.components().size();
+        this.componentElements = new ArrayList<>(componentCount);
+        this.elementsOf = new LinkedHashMap<>(capacity(componentCount));
+        this.lineBranches = new LinkedHashMap<>(capacity(lineCount));
+        this.lineLaws = new LinkedHashMap<>(capacity(lineCount));
         double pRef = 1e6;
         double qRef = 0;
         for (Component c : circuit.components()) {
-            for (String k : SETTINGS) {
-                if (c.type().params().containsKey(k) && c.type() != ComponentType.CHECK_VALVE
-                        && c.type() != ComponentType.PILOT_CHECK_VALVE) {
-                    pRef = Math.max(pRef, c.param(k));
-                }
+            for (String k : SETTINGS_OF[c.type().ordinal()]) {
+                pRef = Math.max(pRef, c.param(k));
             }
             if (c.type().isPump()) {
                 double n = speedOf(c);
@@ -99,7 +100,9 @@ final class CircuitEquations {
                 qRef += c.param("displacement") * n;
             }
         }
-        this.net = new Network(fluid, pRef, Math.max(qRef, 1e-5));
+        // about one unknown per node, per line and per element, and a few per component
+        this.net = new Network(fluid, pRef, Math.max(qRef, 1e-5), netlist.nodeCount() + lineCount + 2 * componentCount,
+                1 + lineCount + 2 * componentCount);
         lineEnds();
         numberNodes();
         int[] all = new int[nodeNames.size()];
@@ -181,6 +184,29 @@ final class CircuitEquations {
     }
 
     private static final List<String> SETTINGS = List.of("cracking_pressure", "setting", "compensator_setting");
+
+    /**
+     * By component type: the settings that set the circuit's typical pressure, in the order of
+     * {@link #SETTINGS}. A check valve's cracking pressure is no setting of the circuit.
+     */
+    private static final String[][] SETTINGS_OF = new String[ComponentType.values().length][];
+
+    static {
+        for (ComponentType t : ComponentType.values()) {
+            List<String> keys = new ArrayList<>();
+            for (String k : SETTINGS) {
+                if (t.params().containsKey(k) && t != ComponentType.CHECK_VALVE
+                        && t != ComponentType.PILOT_CHECK_VALVE) {
+                    keys.add(k);
+                }
+            }
+            SETTINGS_OF[t.ordinal()] = keys.toArray(new String[0]);
+        }
+    }
+
+    private static int capacity(int entries) {
+        return (int) (entries / 0.75f) + 1;
+    }
 
     private void numberNodes() {
         int count = netlist.nodeCount();
@@ -413,6 +439,20 @@ final class CircuitEquations {
 
     private final Map<List<Object>, SpoolPosition> positions = new HashMap<>();
 
+    /** Port pairs of a directional valve that leak across the spool when no open path joins them. */
+    private static final String[] LEAK_PAIRS = {"PA", "PB", "AT", "BT"};
+    private static final String[] LEAK_FROM = {"P", "P", "A", "B"};
+    private static final String[] LEAK_TO = {"A", "B", "T", "T"};
+
+    private static boolean hasPort(ComponentType t, String name) {
+        for (PortSpec p : t.ports()) {
+            if (p.name().equals(name)) {
+                return true;
+            }
+        }
+        return false;
+    }
+
     private void directional(Component c, List<Element> es) {
         String want = state.positionOf(c.id());
         // a position depends on the valve's type, options and name only; circuits repeat valves a lot
@@ -441,10 +481,10 @@ final class CircuitEquations {
         if (leak <= 0) {
             return;
         }
-        for (String pair : List.of("PA", "PB", "AT", "BT")) {
-            String x = pair.substring(0, 1);
-            String y = pair.substring(1);
-            if (c.type().port(x).isEmpty() || c.type().port(y).isEmpty() || joined.contains(pair)) {
+        for (int k = 0; k < LEAK_FROM.length; k++) {
+            String x = LEAK_FROM[k];
+            String y = LEAK_TO[k];
+            if (!hasPort(c.type(), x) || !hasPort(c.type(), y) || joined.contains(LEAK_PAIRS[k])) {
                 continue;
             }
             es.add(new Conductance(c.tag(), node(c, x), x, node(c, y), y, leak));

@@ -327,28 +327,28 @@ public final class SteadyStateSolver {
      */
     private static void reservoirPortFlows(CircuitEquations eq, LineResult[] byLine,
                                            Map<String, ComponentResult> comps) {
+        // flow in at every netlist node, summed over the lines in drawing order
+        double[] in = null;
         for (Component c : eq.circuit.components()) {
             if (c.type() != ComponentType.RESERVOIR) {
                 continue;
             }
-            ComponentResult r = comps.get(c.tag());
-            LinkedHashMap<String, PortResult> ports = new LinkedHashMap<>();
-            for (Map.Entry<String, PortResult> e : r.ports().entrySet()) {
-                int port = eq.netlist.portIndex(c.id(), e.getKey());
-                double in = 0;
+            if (in == null) {
+                in = new double[eq.netlist.nodeCount()];
                 for (int li = 0; li < byLine.length; li++) {
                     LineResult lr = byLine[li];
                     if (lr == null) {
                         continue;
                     }
-                    if (eq.lineEnd[li] == port) {
-                        in += lr.flow();
-                    }
-                    if (eq.lineStart[li] == port) {
-                        in -= lr.flow();
-                    }
+                    in[eq.lineEnd[li]] += lr.flow();
+                    in[eq.lineStart[li]] -= lr.flow();
                 }
-                ports.put(e.getKey(), new PortResult(e.getValue().pressure(), in));
+            }
+            ComponentResult r = comps.get(c.tag());
+            LinkedHashMap<String, PortResult> ports = new LinkedHashMap<>();
+            for (Map.Entry<String, PortResult> e : r.ports().entrySet()) {
+                int port = eq.netlist.portIndex(c.id(), e.getKey());
+                ports.put(e.getKey(), new PortResult(e.getValue().pressure(), in[port]));
             }
             comps.put(c.tag(), new ComponentResult(c.id(), c.tag(), c.type(), Frozen.own(ports), r.values()));
         }

@@ -144,15 +144,23 @@ public final class Netlist {
         this.lineEdgeCount = m;
         // the paths of a directional valve depend on its type, options and spool position only
         Map<List<Object>, List<List<String>>> valvePaths = new HashMap<>();
+        // the components' port nodes are numbered in drawing order, so each one's first node is counted here
+        int first = 0;
         for (Component c : circuit.components()) {
+            int firstOfC = first;
+            for (PortSpec p : c.type().ports()) {
+                if (!p.mechanical()) {
+                    first++;
+                }
+            }
             String position = state == null ? null : state.positionOf(c.id());
             List<List<String>> paths = c.type().isDirectionalValve()
                     ? valvePaths.computeIfAbsent(Arrays.asList(c.type(), c.options(), position),
                             key -> c.type().internalPaths(c.options(), position))
                     : c.type().internalPaths(c.options(), position);
             for (List<String> path : paths) {
-                int a = existingPort(c.id(), path.get(0));
-                int b = existingPort(c.id(), path.get(1));
+                int a = existingPort(firstOfC, c, path.get(0));
+                int b = existingPort(firstOfC, c, path.get(1));
                 NetEdge e = new NetEdge.InternalEdge(c.id(), path.get(0), path.get(1));
                 if (m == es.length) {
                     src = Arrays.copyOf(src, 2 * m);
@@ -221,12 +229,27 @@ public final class Netlist {
         return i;
     }
 
-    private int existingPort(String componentId, String port) {
-        int i = portIndex(componentId, port);
+    private static int existingPort(int first, Component c, String port) {
+        int i = portAt(first, c, port);
         if (i < 0) {
-            throw new IllegalArgumentException("no such vertex in graph: " + componentId + "." + port);
+            throw new IllegalArgumentException("no such vertex in graph: " + c.id() + "." + port);
         }
         return i;
+    }
+
+    /** The number of a hydraulic port of a component whose first port node is numbered first; −1 if none. */
+    private static int portAt(int first, Component c, String port) {
+        int i = first;
+        for (PortSpec p : c.type().ports()) {
+            if (p.mechanical()) {
+                continue;
+            }
+            if (p.name().equals(port)) {
+                return i;
+            }
+            i++;
+        }
+        return -1;
     }
 
     /** Number of nodes; they are numbered from 0 in the order of {@code graph().vertexSet()}. */
@@ -260,16 +283,7 @@ public final class Netlist {
         if (c == null || !c.id().equals(componentId)) {
             return -1;
         }
-        for (PortSpec p : c.type().ports()) {
-            if (p.mechanical()) {
-                continue;
-            }
-            if (p.name().equals(port)) {
-                return i;
-            }
-            i++;
-        }
-        return -1;
+        return portAt(i, c, port);
     }
 
     /** The number of the node a line endpoint sits on, or −1 when the netlist has no such node. */

@@ -42,6 +42,22 @@ public final class Network implements NonlinearSystem {
         this.flowRef = flowRef;
     }
 
+    /**
+     * A network with room for about the given numbers of unknowns and elements, so that building it does
+     * not grow its arrays step by step; it may still grow past them.
+     */
+    public Network(FluidProperties fluid, double pressureRef, double flowRef, int unknowns, int elementCount) {
+        this(fluid, pressureRef, flowRef);
+        if (unknowns > kinds.length) {
+            kinds = new Kind[unknowns];
+            owners = new String[unknowns];
+            unknownScales = new double[unknowns];
+            rowScales = new double[unknowns];
+            rowTolerances = new double[unknowns];
+        }
+        ((ArrayList<Element>) elements).ensureCapacity(elementCount);
+    }
+
     /** Adds a node pressure unknown with its flow-balance row. */
     public int addNode(String name) {
         return add(Kind.PRESSURE, name, pressureRef, flowRef, flowTolerance());
