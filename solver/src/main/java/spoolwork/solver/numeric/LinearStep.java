@@ -288,8 +288,6 @@ final class LinearStep implements Jacobian {
         int m;
         /** Position of each kept unknown in the factorised matrix (after renumbering); −1 if eliminated. */
         int[] place;
-        byte[] role;
-        int[] dest;
         /** Entry indices grouped by role (kept, pivot, row, column), the group ends and each entry's dest. */
         int[] byRole;
         int[] byRoleDest;
@@ -343,95 +341,140 @@ final class LinearStep implements Jacobian {
             Plan p = new Plan();
             p.rowsSeen = Arrays.copyOf(rows, count);
             p.colsSeen = Arrays.copyOf(cols, count);
+            // kept[i]: number of kept unknown i, or −1 − (its place among the eliminated ones)
             int[] kept = new int[n];
             int m = 0;
-            int[] elimPos = new int[n];
             int ne = 0;
             for (int i = 0; i < n; i++) {
-                kept[i] = eliminable[i] ? -1 : m++;
-                elimPos[i] = eliminable[i] ? ne++ : -1;
+                kept[i] = eliminable[i] ? -1 - ne++ : m++;
             }
             p.m = m;
             p.elim = new int[ne];
             for (int i = 0; i < n; i++) {
-                if (eliminable[i]) {
-                    p.elim[elimPos[i]] = i;
+                if (kept[i] < 0) {
+                    p.elim[-1 - kept[i]] = i;
                 }
             }
+            // one pass sorts the entries by role and counts each eliminated unknown's row and column entries
             int[] rc = new int[ne + 1];
             int[] cc = new int[ne + 1];
-            p.role = new byte[count];
+            byte[] role = new byte[count];
+            int[] roleEnd = new int[4];
             for (int k = 0; k < count; k++) {
-                int r = rows[k];
-                int c = cols[k];
-                if (eliminable[r] && eliminable[c] && r != c) {
+                int kr = kept[rows[k]];
+                int kc = kept[cols[k]];
+                byte r;
+                if (kr >= 0) {
+                    if (kc >= 0) {
+                        r = KEPT;
+                    } else {
+                        r = COL;
+                        cc[-kc]++;
+                    }
+                } else if (kc >= 0) {
+                    r = ROW;
+                    rc[-kr]++;
+                } else if (kr == kc) {
+                    r = PIVOT;
+                } else {
                     return null;
                 }
-                if (r == c && eliminable[r]) {
-                    p.role[k] = PIVOT;
-                } else if (eliminable[r]) {
-                    p.role[k] = ROW;
-                    rc[elimPos[r] + 1]++;
-                } else if (eliminable[c]) {
-                    p.role[k] = COL;
-                    cc[elimPos[c] + 1]++;
-                }
+                role[k] = r;
+                roleEnd[r]++;
             }
             for (int e = 0; e < ne; e++) {
                 rc[e + 1] += rc[e];
                 cc[e + 1] += cc[e];
             }
+            for (int r = 1; r < 4; r++) {
+                roleEnd[r] += roleEnd[r - 1];
+            }
+            int keptEntries = roleEnd[KEPT];
+            p.roleEnd = roleEnd;
             p.rowStart = rc;
             p.colStart = cc;
             p.rowSlots = rc[ne];
             p.colSlots = cc[ne];
             p.rowCol = new int[p.rowSlots];
             p.colRow = new int[p.colSlots];
-            p.dest = new int[count];
-            int[] rf = Arrays.copyOf(rc, ne);
-            int[] cf = Arrays.copyOf(cc, ne);
-            for (int k = 0; k < count; k++) {
-                if (p.role[k] == ROW) {
-                    int e = elimPos[rows[k]];
-                    p.dest[k] = rf[e];
-                    p.rowCol[rf[e]++] = cols[k];
-                } else if (p.role[k] == COL) {
-                    int e = elimPos[cols[k]];
-                    p.dest[k] = cf[e];
-                    p.colRow[cf[e]++] = rows[k];
-                }
-            }
-            // pattern of the condensed matrix: kept entries and fill-ins, in kept numbering
+            p.byRole = new int[count];
+            p.byRoleDest = new int[count];
             int fills = 0;
             for (int e = 0; e < ne; e++) {
                 fills += (cc[e + 1] - cc[e]) * (rc[e + 1] - rc[e]);
             }
-            int total = 0;
-            int[] pr = new int[count + fills];
-            int[] pc = new int[count + fills];
+            // entries of the condensed matrix in kept numbering, kept ones first (in arrival order) and then
+            // the fill-ins; each column's entries form a linked list
+            int total = keptEntries + fills;
+            int[] entRow = new int[total];
+            int[] entNext = new int[total];
+            int[] colHead = new int[m];
+            Arrays.fill(colHead, -1);
+            int[] at = {0, roleEnd[KEPT], roleEnd[PIVOT], roleEnd[ROW]};
+            int[] rf = Arrays.copyOf(rc, ne);
+            int[] cf = Arrays.copyOf(cc, ne);
             for (int k = 0; k < count; k++) {
-                if (p.role[k] == KEPT) {
-                    pr[total] = kept[rows[k]];
-                    pc[total++] = kept[cols[k]];
+                byte r = role[k];
+                int slot = at[r]++;
+                p.byRole[slot] = k;
+                if (r == KEPT) {
+                    int c = kept[cols[k]];
+                    entRow[slot] = kept[rows[k]];
+                    entNext[slot] = colHead[c];
+                    colHead[c] = slot;
+                } else if (r == ROW) {
+                    int e = -1 - kept[rows[k]];
+                    p.byRoleDest[slot] = rf[e];
+                    p.rowCol[rf[e]++] = cols[k];
+                } else if (r == COL) {
+                    int e = -1 - kept[cols[k]];
+                    p.byRoleDest[slot] = cf[e];
+                    p.colRow[cf[e]++] = rows[k];
                 }
             }
-            int keptEntries = total;
+            int t = keptEntries;
             for (int e = 0; e < ne; e++) {
                 for (int c = cc[e]; c < cc[e + 1]; c++) {
+                    int row = kept[p.colRow[c]];
                     for (int r = rc[e]; r < rc[e + 1]; r++) {
-                        pr[total] = kept[p.colRow[c]];
-                        pc[total++] = kept[p.rowCol[r]];
+                        int col = kept[p.rowCol[r]];
+                        entRow[t] = row;
+                        entNext[t] = colHead[col];
+                        colHead[col] = t++;
                     }
                 }
             }
+            // unique entries, column by column (kept numbering, rows unsorted); uniqueOf[t] for each entry
+            int[] uStart = new int[m + 1];
+            int[] uRow = new int[total];
+            int[] uCol = new int[total];
+            int[] uniqueOf = new int[total];
+            int[] seenIn = new int[m];
+            int[] seenAt = new int[m];
+            Arrays.fill(seenIn, -1);
+            int unique = 0;
+            for (int c = 0; c < m; c++) {
+                uStart[c] = unique;
+                for (int s = colHead[c]; s >= 0; s = entNext[s]) {
+                    int row = entRow[s];
+                    if (seenIn[row] != c) {
+                        seenIn[row] = c;
+                        seenAt[row] = unique;
+                        uRow[unique] = row;
+                        uCol[unique++] = c;
+                    }
+                    uniqueOf[s] = seenAt[row];
+                }
+            }
+            uStart[m] = unique;
             boolean[] keptDelayed = new boolean[m];
             for (int i = 0; i < n; i++) {
                 if (kept[i] >= 0) {
                     keptDelayed[kept[i]] = delayed[i];
                 }
             }
-            int[] perm = band ? Ordering.reverseCuthillMcKee(m, pr, pc, total)
-                    : Ordering.minimumDegree(m, pr, pc, total, keptDelayed);
+            int[] perm = band ? Ordering.reverseCuthillMcKee(m, uRow, uCol, unique)
+                    : Ordering.minimumDegree(m, uRow, uCol, unique, keptDelayed);
             int[] inverse = new int[m];
             for (int i = 0; i < m; i++) {
                 inverse[perm[i]] = i;
@@ -440,81 +483,48 @@ final class LinearStep implements Jacobian {
             for (int i = 0; i < n; i++) {
                 p.place[i] = kept[i] < 0 ? -1 : inverse[kept[i]];
             }
-            // unique (column, row) pairs in the new numbering, as CSC with rows sorted in each column:
-            // bucket the entries by column, then sort each short column and drop repeats; each entry's place
-            // in the compressed columns is noted on the way
-            int[] start = new int[m + 1];
-            for (int t = 0; t < total; t++) {
-                start[inverse[pc[t]] + 1]++;
-            }
-            for (int c = 0; c < m; c++) {
-                start[c + 1] += start[c];
-            }
-            int[] next = Arrays.copyOf(start, m);
-            int[] bucketRow = new int[total];
-            int[] bucketEntry = new int[total];
-            for (int t = 0; t < total; t++) {
-                int slot = next[inverse[pc[t]]]++;
-                bucketRow[slot] = inverse[pr[t]];
-                bucketEntry[slot] = t;
-            }
+            // the renumbered pattern as compressed columns with rows sorted: column c is kept column
+            // perm[c], its short list sorted by insertion; finalOf[u] is where unique entry u ends up
             p.colPtr = new int[m + 1];
-            int[] rowIdx = new int[total];
-            int[] placeOf = new int[total];
-            int unique = 0;
+            int[] rowIdx = new int[unique];
+            int[] src = new int[unique];
+            int[] finalOf = uCol;
+            int pos = 0;
             for (int c = 0; c < m; c++) {
-                int lo = start[c];
-                int hi = start[c + 1];
-                for (int i = lo + 1; i < hi; i++) {
-                    int v = bucketRow[i];
-                    int w = bucketEntry[i];
-                    int j = i - 1;
-                    while (j >= lo && bucketRow[j] > v) {
-                        bucketRow[j + 1] = bucketRow[j];
-                        bucketEntry[j + 1] = bucketEntry[j];
+                p.colPtr[c] = pos;
+                int lo = pos;
+                int old = perm[c];
+                for (int u = uStart[old]; u < uStart[old + 1]; u++) {
+                    int v = inverse[uRow[u]];
+                    int j = pos - 1;
+                    while (j >= lo && rowIdx[j] > v) {
+                        rowIdx[j + 1] = rowIdx[j];
+                        src[j + 1] = src[j];
                         j--;
                     }
-                    bucketRow[j + 1] = v;
-                    bucketEntry[j + 1] = w;
-                }
-                p.colPtr[c] = unique;
-                for (int i = lo; i < hi; i++) {
-                    if (i == lo || bucketRow[i] != bucketRow[i - 1]) {
-                        rowIdx[unique++] = bucketRow[i];
-                    }
-                    placeOf[bucketEntry[i]] = unique - 1;
+                    rowIdx[j + 1] = v;
+                    src[j + 1] = u;
+                    pos++;
                 }
             }
             p.colPtr[m] = unique;
-            p.rowIdx = Arrays.copyOf(rowIdx, unique);
+            for (int q = 0; q < unique; q++) {
+                finalOf[src[q]] = q;
+            }
+            p.rowIdx = rowIdx;
+            for (int s = 0; s < keptEntries; s++) {
+                p.byRoleDest[s] = finalOf[uniqueOf[s]];
+            }
+            p.fill = new int[fills];
+            for (int f = 0; f < fills; f++) {
+                p.fill[f] = finalOf[uniqueOf[keptEntries + f]];
+            }
             p.values = new double[unique];
             p.pivot = new double[n];
             p.rowVal = new double[p.rowSlots];
             p.colVal = new double[p.colSlots];
             p.b = new double[n];
             p.y = new double[m];
-            int t = 0;
-            for (int k = 0; k < count; k++) {
-                if (p.role[k] == KEPT) {
-                    p.dest[k] = placeOf[t++];
-                }
-            }
-            p.fill = Arrays.copyOfRange(placeOf, keptEntries, keptEntries + fills);
-            p.roleEnd = new int[4];
-            for (int k = 0; k < count; k++) {
-                p.roleEnd[p.role[k]]++;
-            }
-            for (int r = 1; r < 4; r++) {
-                p.roleEnd[r] += p.roleEnd[r - 1];
-            }
-            int[] at = {0, p.roleEnd[KEPT], p.roleEnd[PIVOT], p.roleEnd[ROW]};
-            p.byRole = new int[count];
-            p.byRoleDest = new int[count];
-            for (int k = 0; k < count; k++) {
-                int slot = at[p.role[k]]++;
-                p.byRole[slot] = k;
-                p.byRoleDest[slot] = p.dest[k];
-            }
             return p;
         }
     }

@@ -171,28 +171,45 @@ final class Ordering {
             perm[k] = v;
             int[] nv = adj[v];
             int lv = len[v];
+            // v's neighbours carry vStamp, so that a neighbour already joined to all the others (usual after
+            // condensation) only loses v, without a second pass
+            int vStamp = ++stamp;
+            for (int t = 0; t < lv; t++) {
+                mark[nv[t]] = vStamp;
+            }
             for (int t = 0; t < lv; t++) {
                 int u = nv[t];
                 // u's new neighbours: its old ones without v, and v's other neighbours
-                stamp++;
                 int[] au = adj[u];
                 int lu = 0;
+                int common = 0;
                 for (int s = 0; s < len[u]; s++) {
                     int w = au[s];
                     if (w != v) {
                         au[lu++] = w;
-                        mark[w] = stamp;
+                        if (mark[w] == vStamp) {
+                            common++;
+                        }
                     }
                 }
-                mark[u] = stamp;
-                for (int s = 0; s < lv; s++) {
-                    int w = nv[s];
-                    if (mark[w] != stamp) {
-                        if (lu == au.length) {
-                            au = Arrays.copyOf(au, 2 * au.length);
-                            adj[u] = au;
+                if (common < lv - 1) {
+                    stamp++;
+                    for (int s = 0; s < lu; s++) {
+                        mark[au[s]] = stamp;
+                    }
+                    mark[u] = stamp;
+                    for (int s = 0; s < lv; s++) {
+                        int w = nv[s];
+                        if (mark[w] != stamp) {
+                            if (lu == au.length) {
+                                au = Arrays.copyOf(au, 2 * au.length);
+                                adj[u] = au;
+                            }
+                            au[lu++] = w;
                         }
-                        au[lu++] = w;
+                    }
+                    for (int s = 0; s < lv; s++) {
+                        mark[nv[s]] = vStamp;
                     }
                 }
                 len[u] = lu;

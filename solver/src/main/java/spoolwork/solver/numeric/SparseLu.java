@@ -118,7 +118,8 @@ final class SparseLu {
         last = new double[ap[n]];
         changed = new boolean[n];
         same = new boolean[n];
-        int guess = 4 * ap[n] + n;
+        // L and U of these matrices hold about as many entries as A each; the arrays grow when need be
+        int guess = ap[n] + 2 * n;
         lp = new int[n + 1];
         up = new int[n + 1];
         li = new int[guess];
