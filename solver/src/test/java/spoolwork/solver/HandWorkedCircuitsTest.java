@@ -205,6 +205,28 @@ class HandWorkedCircuitsTest {
     }
 
     @Test
+    void compensatedPumpSettlesPartWayThroughItsBand() {
+        // Compensator: full stroke up to the 10 bar setting, none at 12 bar, linear between (the pump's stated
+        // characteristic). Load: a filter whose clean element is linear, R = 15e5 Pa / 3.8667e-4 m³/s.
+        // Full stroke would give R·D·n = 15 bar > 10 bar, so the pump destrokes:
+        // p = R·Q, Q = D·n·(12 bar − p)/2 bar  →  p = R·D·n·12e5/(2e5 + R·D·n) = 15e5·12e5/17e5 = 10.588 bar,
+        // stroke k = (12 − 10.588)/2 = 0.70588, Q = 0.70588 · 3.8667e-4 = 2.7294e-4 m³/s; P = Q·Δp = 289.0 W.
+        double dn = 16e-6 * N;
+        Circuit c = new CircuitBuilder()
+                .add("T1", ComponentType.RESERVOIR)
+                .add("P1", ComponentType.COMPENSATED_PUMP, "displacement", 16e-6, "volumetric_efficiency", 1.0,
+                        "compensator_setting", 10e5, "compensator_band", 2e5)
+                .add("X1", ComponentType.FILTER, "clean_drop", 15e5, "rated_flow", dn, "bypass_cracking", 50e5)
+                .ideal("T1.S", "P1.S").ideal("P1.P", "X1.A").ideal("X1.B", "T1.T").ideal("P1.L", "T1.T")
+                .build(OperatingState.named("Part stroke"));
+        Solution s = solve(c);
+        assertEquals(15e5 * 12e5 / 17e5, s.pressure("P1", "P"), 1);
+        assertEquals((12e5 - 15e5 * 12e5 / 17e5) / 2e5, s.value("P1", "stroke"), 1e-6);
+        assertEquals(dn * (12e5 - 15e5 * 12e5 / 17e5) / 2e5, s.value("P1", "flow_m3s"), 1e-9);
+        assertEquals(289.0, s.power().pumpHydraulic(), 0.2);
+    }
+
+    @Test
     void closedCentreHoldsTheLoadWithACaution() {
         Circuit c = new CircuitBuilder()
                 .add("T1", ComponentType.RESERVOIR)
