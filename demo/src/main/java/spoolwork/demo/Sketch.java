@@ -30,18 +30,9 @@ final class Sketch {
 
     /** Places a component; settings are key/value pairs, numbers for parameters and strings for options. */
     Sketch place(String tag, ComponentType type, double x, double y, Object... settings) {
-        Map<String, Double> p = new LinkedHashMap<>();
-        Map<String, String> o = new LinkedHashMap<>();
-        for (int i = 0; i < settings.length; i += 2) {
-            if (settings[i + 1] instanceof Number n) {
-                p.put((String) settings[i], n.doubleValue());
-            } else {
-                o.put((String) settings[i], (String) settings[i + 1]);
-            }
-        }
         String id = "c" + (++next);
         ids.put(tag, id);
-        components.add(new Component(id, tag, type, x, y, 0, false, p, o, null));
+        components.add(Component.of(id, tag, type, x, y, settings));
         return this;
     }
 

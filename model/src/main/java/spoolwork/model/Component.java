@@ -54,9 +54,32 @@ public record Component(String id, String tag, ComponentType type, double x, dou
         options = Collections.unmodifiableMap(o);
     }
 
-    /** A new component with default parameters and options. */
-    public static Component of(String id, String tag, ComponentType type, double x, double y) {
-        return new Component(id, tag, type, x, y, 0, false, Map.of(), Map.of(), null);
+    /**
+     * A new component, unrotated. Settings are key/value pairs, a number for a parameter (SI) and a string
+     * for an option, e.g. {@code of("c1", "V1", RELIEF_VALVE, 0, 0, "cracking_pressure", 150e5)}; every
+     * parameter and option not given takes its default.
+     */
+    public static Component of(String id, String tag, ComponentType type, double x, double y, Object... settings) {
+        if (settings.length % 2 != 0) {
+            throw new IllegalArgumentException("settings of " + tag + " must come in key/value pairs");
+        }
+        Map<String, Double> p = new LinkedHashMap<>();
+        Map<String, String> o = new LinkedHashMap<>();
+        for (int i = 0; i < settings.length; i += 2) {
+            if (!(settings[i] instanceof String key)) {
+                throw new IllegalArgumentException("setting " + i / 2 + " of " + tag + " has no key");
+            }
+            Object v = settings[i + 1];
+            if (v instanceof Number n) {
+                p.put(key, n.doubleValue());
+            } else if (v instanceof String choice) {
+                o.put(key, choice);
+            } else {
+                throw new IllegalArgumentException("setting " + key + " of " + tag
+                        + " must be a number (parameter) or a string (option)");
+            }
+        }
+        return new Component(id, tag, type, x, y, 0, false, p, o, null);
     }
 
     public double param(String key) {

@@ -1,9 +1,7 @@
 package spoolwork.solver;
 
 import java.util.ArrayList;
-import java.util.LinkedHashMap;
 import java.util.List;
-import java.util.Map;
 
 import spoolwork.model.Circuit;
 import spoolwork.model.Component;
@@ -26,18 +24,7 @@ final class CircuitBuilder {
 
     /** Adds a component; settings are key/value pairs, numbers for parameters, strings for options. */
     CircuitBuilder add(String tag, ComponentType type, Object... settings) {
-        Map<String, Double> p = new LinkedHashMap<>();
-        Map<String, String> o = new LinkedHashMap<>();
-        for (int i = 0; i < settings.length; i += 2) {
-            String k = (String) settings[i];
-            Object v = settings[i + 1];
-            if (v instanceof Number n) {
-                p.put(k, n.doubleValue());
-            } else {
-                o.put(k, (String) v);
-            }
-        }
-        components.add(new Component(tag, tag, type, components.size() * 6, 0, 0, false, p, o, null));
+        components.add(Component.of(tag, tag, type, components.size() * 6, 0, settings));
         return this;
     }
 

@@ -44,17 +44,8 @@ public final class CircuitGenerator {
     }
 
     private String add(ComponentType t, double x, double y, Object... settings) {
-        Map<String, Double> p = new LinkedHashMap<>();
-        Map<String, String> o = new LinkedHashMap<>();
-        for (int i = 0; i < settings.length; i += 2) {
-            if (settings[i + 1] instanceof Number n) {
-                p.put((String) settings[i], n.doubleValue());
-            } else {
-                o.put((String) settings[i], (String) settings[i + 1]);
-            }
-        }
         String id = "c" + (++ids);
-        comps.add(new Component(id, t.tagPrefix() + ids, t, x, y, 0, false, p, o, null));
+        comps.add(Component.of(id, t.tagPrefix() + ids, t, x, y, settings));
         return id;
     }
 
