@@ -17,18 +17,7 @@ public interface DropLaw {
     /** Quadratic (turbulent) law from a rated flow at a rated drop, with a laminar core below 0.1 % of rated. */
     static DropLaw rated(double ratedFlow, double ratedDrop) {
         double k = ratedDrop / (ratedFlow * ratedFlow);
-        double qt = 1e-3 * ratedFlow;
-        return new DropLaw() {
-            @Override
-            public double drop(double q, double[] d) {
-                return Laws.quadraticDrop(k, q, qt, d);
-            }
-
-            @Override
-            public double typicalFlow() {
-                return ratedFlow;
-            }
-        };
+        return quadratic(k, 1e-3 * ratedFlow, ratedFlow);
     }
 
     /**
@@ -38,7 +27,11 @@ public interface DropLaw {
     static DropLaw orifice(double cd, double diameter, double density, double qt) {
         double area = Math.PI * diameter * diameter / 4;
         double k = density / (2 * cd * cd * area * area);
-        double typical = Math.sqrt(10e5 / k);
+        return quadratic(k, qt, Math.sqrt(10e5 / k));
+    }
+
+    /** Δp = k·q·√(q² + qt²) (see {@link Laws#quadraticDrop}) with the given typical flow. */
+    private static DropLaw quadratic(double k, double qt, double typical) {
         return new DropLaw() {
             @Override
             public double drop(double q, double[] d) {

@@ -153,16 +153,25 @@ public abstract class OneWayValve extends Element {
 
     /**
      * Sequence valve P → A: holds its inlet at the cracking pressure plus override while the outlet is
-     * lower; once the outlet needs more, it is wide open with a turbulent drop.
+     * lower; once the outlet needs more, it is wide open with a turbulent drop. A counterbalance valve is
+     * the same law with pilot assistance.
      */
-    public static final class Sequence extends OneWayValve {
+    public static class Sequence extends OneWayValve {
         private final double crack;
+        private final double ratio;
         private final double slope;
         private final DropLaw open;
 
         public Sequence(String owner, int p, int a, double crack, double override, double rated, Network net) {
-            super(owner, p, "P", a, "A", -1, rated, net);
+            this(owner, p, "P", a, "A", -1, crack, 0, override, rated, net);
+        }
+
+        /** With a pilot port x whose pressure, times the ratio, helps to open the valve. */
+        protected Sequence(String owner, int in, String portIn, int out, String portOut, int x, double crack,
+                           double ratio, double override, double rated, Network net) {
+            super(owner, in, portIn, out, portOut, x, rated, net);
             this.crack = crack;
+            this.ratio = ratio;
             this.slope = override / rated;
             this.open = DropLaw.rated(rated, Math.max(override, 1e5));
         }
@@ -172,10 +181,10 @@ public abstract class OneWayValve extends Element {
             double[] t = t1;
             double r = open.drop(flow, t);
             double[] s = s2;
-            double need = Laws.smoothMax(crack + slope * flow, pb + r, CORNER, s);
+            double need = Laws.smoothMax(crack - ratio * px + slope * flow, pb + r, CORNER, s);
             d[0] = -1;
             d[1] = s[1];
-            d[2] = 0;
+            d[2] = -ratio * s[0];
             d[3] = s[0] * slope + s[1] * t[0];
             return need - pa;
         }
@@ -225,37 +234,10 @@ public abstract class OneWayValve extends Element {
      * Counterbalance valve, controlled path A → B: opens when p_A + pilot ratio·p_X reaches the setting,
      * then rises with its override; wide open it has a turbulent drop.
      */
-    public static final class Counterbalance extends OneWayValve {
-        private final double setting;
-        private final double ratio;
-        private final double slope;
-        private final DropLaw open;
-
+    public static final class Counterbalance extends Sequence {
         public Counterbalance(String owner, int a, int b, int x, double setting, double ratio, double override,
                               double rated, Network net) {
-            super(owner, a, "A", b, "B", x, rated, net);
-            this.setting = setting;
-            this.ratio = ratio;
-            this.slope = override / rated;
-            this.open = DropLaw.rated(rated, Math.max(override, 1e5));
-        }
-
-        @Override
-        protected double margin(double pa, double pb, double px, double flow, double[] d) {
-            double[] t = t1;
-            double r = open.drop(flow, t);
-            double[] s = s2;
-            double need = Laws.smoothMax(setting - ratio * px + slope * flow, pb + r, CORNER, s);
-            d[0] = -1;
-            d[1] = s[1];
-            d[2] = -ratio * s[0];
-            d[3] = s[0] * slope + s[1] * t[0];
-            return need - pa;
-        }
-
-        @Override
-        protected PowerKind kind() {
-            return PowerKind.VALVE;
+            super(owner, a, "A", b, "B", x, setting, ratio, override, rated, net);
         }
     }
 }
