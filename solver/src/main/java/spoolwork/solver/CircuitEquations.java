@@ -67,8 +67,6 @@ final class CircuitEquations {
     final Map<String, List<Element>> elementsOf;
     /** Loss-bearing line elements by line id. */
     final Map<String, Branch> lineBranches;
-    final Map<String, LineLaw> lineLaws;
-    final Map<String, Pump> pumps = new LinkedHashMap<>();
     final Map<String, Double> pumpSpeeds = new LinkedHashMap<>();
     final NodeConductance nodes;
 
@@ -87,7 +85,6 @@ final class CircuitEquations {
         this.componentElements = new ArrayList<>(componentCount);
         this.elementsOf = new LinkedHashMap<>(capacity(componentCount));
         this.lineBranches = new LinkedHashMap<>(capacity(lineCount));
-        this.lineLaws = new LinkedHashMap<>(capacity(lineCount));
         double pRef = 1e6;
         double qRef = 0;
         for (Component c : circuit.components()) {
@@ -124,7 +121,6 @@ final class CircuitEquations {
             net.addElement(b);
             lineBranch[li] = b;
             lineBranches.put(l.id(), b);
-            lineLaws.put(l.id(), law);
         }
         int base = 0;
         for (Component c : circuit.components()) {
@@ -317,17 +313,7 @@ final class CircuitEquations {
         if (c != building) {
             return netlist.portIndex(c.id(), port);
         }
-        int i = buildingBase;
-        for (PortSpec p : c.type().ports()) {
-            if (p.mechanical()) {
-                continue;
-            }
-            if (p.name().equals(port)) {
-                return i;
-            }
-            i++;
-        }
-        return -1;
+        return Netlist.portAt(buildingBase, c, port);
     }
 
     int node(Component c, String port) {
@@ -353,7 +339,6 @@ final class CircuitEquations {
                         pumpSpeeds.get(c.id()), c.param("volumetric_efficiency"), c.param("overall_efficiency"),
                         c.param("reference_pressure"), comp, comp ? c.param("compensator_setting") : 0,
                         comp ? c.param("compensator_band") : 1, net);
-                pumps.put(c.id(), p);
                 es.add(p);
             }
             case HYDRAULIC_MOTOR -> {

@@ -237,8 +237,11 @@ public final class Netlist {
         return i;
     }
 
-    /** The number of a hydraulic port of a component whose first port node is numbered first; −1 if none. */
-    private static int portAt(int first, Component c, String port) {
+    /**
+     * The number of a hydraulic port of component c, given the number of its first hydraulic port (ports
+     * are numbered consecutively in the type's port order); −1 if c has no such hydraulic port.
+     */
+    public static int portAt(int first, Component c, String port) {
         int i = first;
         for (PortSpec p : c.type().ports()) {
             if (p.mechanical()) {
