@@ -33,12 +33,8 @@ public final class Newton {
         double[] f = new double[n];
         double[] xt = new double[n];
         double[] ft = new double[n];
-        double[] rowScale = new double[n];
-        double[] colScale = new double[n];
-        for (int i = 0; i < n; i++) {
-            rowScale[i] = s.rowScale(i);
-            colScale[i] = s.unknownScale(i);
-        }
+        double[] rowScale = rowScales(s);
+        double[] colScale = unknownScales(s);
         LinearStep lin = new LinearStep(n, method, s);
         s.beginRun();
         s.evaluate(x, f, lin);
@@ -161,7 +157,26 @@ public final class Newton {
         return new Result(x, false, maxIterations, "iteration limit reached", worst(s, f));
     }
 
-    private static double[] negScaled(NonlinearSystem s, double[] f, double[] rowScale) {
+    /** Typical size of every row of s. */
+    static double[] rowScales(NonlinearSystem s) {
+        double[] r = new double[s.size()];
+        for (int i = 0; i < r.length; i++) {
+            r[i] = s.rowScale(i);
+        }
+        return r;
+    }
+
+    /** Typical size of every unknown of s. */
+    static double[] unknownScales(NonlinearSystem s) {
+        double[] c = new double[s.size()];
+        for (int i = 0; i < c.length; i++) {
+            c[i] = s.unknownScale(i);
+        }
+        return c;
+    }
+
+    /** Right-hand side of the scaled Newton step: −F/rowScale, complementarity rows on their side in force. */
+    static double[] negScaled(NonlinearSystem s, double[] f, double[] rowScale) {
         double[] r = new double[f.length];
         for (int i = 0; i < f.length; i++) {
             r[i] = -s.stepResidual(i, f) / rowScale[i];

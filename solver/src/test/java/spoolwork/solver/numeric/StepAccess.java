@@ -9,19 +9,12 @@ public final class StepAccess {
     public static double[] step(NonlinearSystem s, double[] x, LinearMethod method) {
         int n = s.size();
         double[] f = new double[n];
-        double[] rowScale = new double[n];
-        double[] colScale = new double[n];
-        for (int i = 0; i < n; i++) {
-            rowScale[i] = s.rowScale(i);
-            colScale[i] = s.unknownScale(i);
-        }
+        double[] rowScale = Newton.rowScales(s);
+        double[] colScale = Newton.unknownScales(s);
         LinearStep lin = new LinearStep(n, method, s);
         s.beginRun();
         s.evaluate(x, f, lin);
-        double[] rhs = new double[n];
-        for (int i = 0; i < n; i++) {
-            rhs[i] = -s.stepResidual(i, f) / rowScale[i];
-        }
+        double[] rhs = Newton.negScaled(s, f, rowScale);
         return lin.solve(rhs, rowScale, colScale);
     }
 }
