@@ -136,15 +136,4 @@ public final class Pump extends Element {
         r.value("inlet_pressure_abs_pa", ps + 101_325);
         r.value("leakage_flow_m3s", leak);
     }
-
-    /** Hydraulic power delivered at the solution, W. */
-    public double hydraulicPower(double[] x, Network net) {
-        Report r = new Report();
-        report(x, net, r);
-        return r.values.get("hydraulic_power_w");
-    }
-
-    public double geometricFlow() {
-        return geometric;
-    }
 }

@@ -31,10 +31,6 @@ final class LinearStep implements Jacobian {
     /** Unknowns of complementarity rows, numbered after a neighbour (see Ordering#minimumDegree). */
     private final boolean[] delayed;
 
-    LinearStep(int n, LinearMethod method) {
-        this(n, method, null);
-    }
-
     LinearStep(int n, LinearMethod method, NonlinearSystem s) {
         this.n = n;
         // about six entries per unknown in these systems; the buffers grow if need be
