@@ -233,7 +233,8 @@ public final class Network implements NonlinearSystem {
      * solves the linearised complementarity problem once the sides are settled ({@link #switchSides}). Both
      * sides are stamped, the unused one with zeros, so the sparsity pattern never changes.
      *
-     * @param cols columns the two sides depend on (−1 entries are skipped)
+     * @param cols columns the two sides depend on (−1 entries are skipped); the same array on every call
+     *             for a row, never changed
      * @param da   ∂a/∂x[cols[k]]
      * @param db   ∂b/∂x[cols[k]]
      */
@@ -249,15 +250,16 @@ public final class Network implements NonlinearSystem {
         if (j == null) {
             return;
         }
-        if (pairCols[row] == null || pairCols[row].length != cols.length) {
-            pairCols[row] = new int[cols.length];
+        // an element's column list is fixed for the solve, so it is kept, not copied; the derivatives are copied
+        // because elements pass them in scratch arrays
+        pairCols[row] = cols;
+        if (gradA[row] == null || gradA[row].length != cols.length) {
             gradA[row] = new double[cols.length];
             gradB[row] = new double[cols.length];
         }
         boolean useA = side[row] == 0;
         stampedAt[row] = j.size();
         for (int k = 0; k < cols.length; k++) {
-            pairCols[row][k] = cols[k];
             gradA[row][k] = da[k];
             gradB[row][k] = db[k];
             if (cols[k] >= 0) {
