@@ -258,7 +258,7 @@ public final class Network implements NonlinearSystem {
             gradB[row] = new double[cols.length];
         }
         boolean useA = side[row] == 0;
-        stampedAt[row] = j.size();
+        stampedAt[row] = j instanceof Jacobian.Kept kept ? kept.size() : -1;
         for (int k = 0; k < cols.length; k++) {
             gradA[row][k] = da[k];
             gradB[row][k] = db[k];
@@ -272,7 +272,7 @@ public final class Network implements NonlinearSystem {
     private int[] stampedAt;
 
     @Override
-    public boolean restampSides(Jacobian j) {
+    public boolean restampSides(Jacobian.Kept j) {
         if (side == null) {
             return true;
         }

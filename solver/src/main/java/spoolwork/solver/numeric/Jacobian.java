@@ -4,13 +4,12 @@ package spoolwork.solver.numeric;
 public interface Jacobian {
     void add(int row, int col, double value);
 
-    /** How many entries have been added so far, or −1 when the receiver does not keep them in order. */
-    default int size() {
-        return -1;
-    }
+    /** A receiver that keeps its entries in the order they arrived, so that values can be rewritten in place. */
+    interface Kept extends Jacobian {
+        /** How many entries have been added so far. */
+        int size();
 
-    /** Overwrites the value of entry number {@code index} (counted as by {@link #size()}). */
-    default void set(int index, double value) {
-        throw new UnsupportedOperationException("this Jacobian does not keep its entries");
+        /** Overwrites the value of entry number {@code index} (counted as by {@link #size()}). */
+        void set(int index, double value);
     }
 }

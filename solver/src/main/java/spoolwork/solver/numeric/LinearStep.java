@@ -20,7 +20,7 @@ import org.ejml.dense.row.factory.LinearSolverFactory_DDRM;
  * iteration to the next. The fallback for systems that cannot be condensed uses EJML's sparse LU with
  * {@link FillReducing#NONE} after reverse Cuthill–McKee: EJML's own orderings are not safe with its LU.
  */
-final class LinearStep implements Jacobian {
+final class LinearStep implements Jacobian.Kept {
     private final int n;
     private final boolean dense;
     private Triplets current;
@@ -55,7 +55,7 @@ final class LinearStep implements Jacobian {
     }
 
     /** Jacobian entries in the order they arrived; entries for the same place are summed later. */
-    private static final class Triplets implements Jacobian {
+    private static final class Triplets implements Jacobian.Kept {
         int[] rows;
         int[] cols;
         double[] vals;

@@ -61,7 +61,7 @@ public interface NonlinearSystem {
      * Rewrites, in j, the Jacobian rows of the complementarity rows for the sides now in force, at the
      * point last evaluated into j; returns false when it cannot (then evaluate again).
      */
-    default boolean restampSides(Jacobian j) {
+    default boolean restampSides(Jacobian.Kept j) {
         return false;
     }
 
