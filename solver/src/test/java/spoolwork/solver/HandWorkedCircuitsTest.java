@@ -206,8 +206,9 @@ class HandWorkedCircuitsTest {
 
     @Test
     void compensatedPumpSettlesPartWayThroughItsBand() {
-        // Compensator: full stroke up to the 10 bar setting, none at 12 bar, linear between (the pump's stated
-        // characteristic). Load: a filter whose clean element is linear, R = 15e5 Pa / 3.8667e-4 m³/s.
+        // Compensator: full stroke up to the 10 bar setting, none at 12 bar, linear between (the usual static
+        // characteristic of a pressure compensator, common practice). Load: a filter whose clean element is
+        // linear, R = 15e5 Pa / 3.8667e-4 m³/s.
         // Full stroke would give R·D·n = 15 bar > 10 bar, so the pump destrokes:
         // p = R·Q, Q = D·n·(12 bar − p)/2 bar  →  p = R·D·n·12e5/(2e5 + R·D·n) = 15e5·12e5/17e5 = 10.588 bar,
         // stroke k = (12 − 10.588)/2 = 0.70588, Q = 0.70588 · 3.8667e-4 = 2.7294e-4 m³/s; P = Q·Δp = 289.0 W.
