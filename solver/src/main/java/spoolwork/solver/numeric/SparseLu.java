@@ -12,12 +12,17 @@ import java.util.Arrays;
  * found by a depth-first search, and the pivot is the diagonal entry (row Q[k]) when it is at least
  * {@link #PIVOT_TOLERANCE} times the largest candidate, else the largest candidate. Later calls with new
  * values keep the row order and the patterns of L and U and only redo the arithmetic, without searching
- * and without allocating. A refactorisation falls back to pivoting when a kept pivot no longer passes the
- * same threshold test against the candidates of its column, so the bound on the entries of L
- * (|l| ≤ 1/{@link #PIVOT_TOLERANCE}) holds in both cases; the columns before the failed one have passed
- * the test with the new values and are kept, the search starts again at the failed column. Both the
- * refactorisation and that search leave alone the columns whose inputs did not change since the last
- * factorisation (see {@link #refactor} and {@link #pivotingFactor}).
+ * and without allocating. A refactorisation keeps a pivot while it is at least
+ * {@link #REFACTOR_PIVOT_TOLERANCE} of the largest candidate of its column and falls back to pivoting from
+ * the first column where it is not; the columns before the failed one are kept, the search starts again at
+ * the failed column. Both the refactorisation and that search leave alone the columns whose inputs did not
+ * change since the last factorisation (see {@link #refactor} and {@link #pivotingFactor}).
+ *
+ * <p>The looser test for kept pivots is what lets one pivot order serve both sides of a complementarity
+ * row: a node held only by leakage has a diagonal some 1e-8 of the margin row that pivots its column on
+ * the other side, and with the search's own threshold every change of side would search again. A
+ * factorisation with a kept pivot weaker than {@link #PIVOT_TOLERANCE} can have large entries in L, so
+ * {@link #solve} then takes one step of iterative refinement against the matrix itself.
  *
  * <p>A matrix is reported singular ({@code false}) when a column has no usable pivot: every candidate is
  * zero, or the largest is below {@link #SINGULAR_TOLERANCE} times the largest magnitude met in that
@@ -26,6 +31,8 @@ import java.util.Arrays;
 final class SparseLu {
     /** A diagonal pivot is kept while it is at least this fraction of the largest candidate. */
     static final double PIVOT_TOLERANCE = 1e-3;
+    /** A refactorisation keeps a pivot while it is at least this fraction of the largest candidate. */
+    static final double REFACTOR_PIVOT_TOLERANCE = 1e-9;
     /** Relative size below which the best pivot of a column counts as zero. */
     static final double SINGULAR_TOLERANCE = 1e-14;
 
@@ -51,6 +58,11 @@ final class SparseLu {
     private final double[] last;
     /** changed[k]: column k of L and U was recomputed by the running refactorisation. */
     private final boolean[] changed;
+    /** weak[k]: the pivot of column k is below PIVOT_TOLERANCE of its column's largest candidate. */
+    private final boolean[] weak;
+    private int weakCount;
+    /** Residual work array of the refinement step. */
+    private final double[] residual;
     /** same[k]: column k of L and U (and its pivot row) is the one of the factorisation before. */
     private final boolean[] same;
     // the columns from the failed one on of the factorisation before, kept while the search runs
@@ -118,6 +130,8 @@ final class SparseLu {
         last = new double[ap[n]];
         changed = new boolean[n];
         same = new boolean[n];
+        weak = new boolean[n];
+        residual = new double[n];
         // L and U of these matrices hold about as many entries as A each; the arrays grow when need be
         int guess = ap[n] + 2 * n;
         lp = new int[n + 1];
@@ -191,6 +205,8 @@ final class SparseLu {
         Arrays.fill(x, 0);
         if (from == 0) {
             Arrays.fill(pinv, -1);
+            Arrays.fill(weak, false);
+            weakCount = 0;
         } else {
             // keep columns 0..from−1 and their pivot rows; L goes back to rows of A while the search runs
             for (int p = 0; p < lp[from]; p++) {
@@ -233,6 +249,10 @@ final class SparseLu {
                 continue;
             }
             same[k] = false;
+            if (weak[k]) {
+                weak[k] = false;
+                weakCount--;
+            }
             int top = reach(col);
             double big = 0;
             for (int p = ap[col]; p < ap[col + 1]; p++) {
@@ -463,9 +483,14 @@ final class SparseLu {
                 best = Math.max(best, Math.abs(x[li[t]]));
             }
             big = Math.max(big, best);
-            if (!(Math.abs(pivot) >= PIVOT_TOLERANCE * best) || !(best > SINGULAR_TOLERANCE * big)
+            if (!(Math.abs(pivot) >= REFACTOR_PIVOT_TOLERANCE * best) || !(best > SINGULAR_TOLERANCE * big)
                     || !Double.isFinite(big)) {
                 return k;
+            }
+            boolean w = Math.abs(pivot) < PIVOT_TOLERANCE * best;
+            if (w != weak[k]) {
+                weak[k] = w;
+                weakCount += w ? 1 : -1;
             }
             ux[diag] = pivot;
             for (int t = lp[k] + 1; t < lp[k + 1]; t++) {
@@ -483,6 +508,35 @@ final class SparseLu {
         if (!factored) {
             throw new IllegalStateException("sparse LU: solve before a successful factorisation");
         }
+        if (weakCount == 0) {
+            substitute(b, out);
+            return;
+        }
+        // r = b − A·out with the matrix itself, then out += A⁻¹·r
+        double[] r = residual;
+        System.arraycopy(b, 0, r, 0, n);
+        substitute(b, out);
+        for (int j = 0; j < n; j++) {
+            double xj = out[j];
+            if (xj != 0) {
+                for (int p = ap[j]; p < ap[j + 1]; p++) {
+                    r[ai[p]] -= last[p] * xj;
+                }
+            }
+        }
+        substitute(r, r);
+        for (int j = 0; j < n; j++) {
+            out[j] += r[j];
+        }
+    }
+
+    /** True when the last factorisation kept a pivot below {@link #PIVOT_TOLERANCE} (then solve refines). */
+    boolean weakPivots() {
+        return factored && weakCount > 0;
+    }
+
+    /** out = A⁻¹·b by the triangular factors alone; b and out may be the same array. */
+    private void substitute(double[] b, double[] out) {
         double[] y = x;
         for (int k = 0; k < n; k++) {
             y[k] = b[prow[k]];
