@@ -152,7 +152,38 @@ final class LinearStep implements Jacobian.Kept {
      * is singular or the answer is not finite.
      */
     double[] solve(double[] rhs, double[] rowScale, double[] colScale) {
-        return dense ? solveDense(rhs, rowScale, colScale) : solveSparse(rhs, rowScale, colScale);
+        reusable = false;
+        double[] y = dense ? solveDense(rhs, rowScale, colScale) : solveSparse(rhs, rowScale, colScale);
+        reusable = y != null && (dense ? denseLu != null : reusable);
+        return y;
+    }
+
+    /** True while the matrix of the last successful {@link #solve} is kept factorised for {@link #solveAgain}. */
+    private boolean reusable;
+    /** The dense factorisation of the last dense solve. */
+    private LinearSolver<DMatrixRMaj, DMatrixRMaj> denseLu;
+
+    /** True when {@link #solveAgain} can answer. */
+    boolean canSolveAgain() {
+        return reusable;
+    }
+
+    /**
+     * Solves with the matrix of the last successful {@link #solve} (same scales), whatever entries arrived
+     * since: a chord step. Returns null when there is no such matrix or the answer is not finite.
+     */
+    double[] solveAgain(double[] rhs) {
+        if (!reusable) {
+            return null;
+        }
+        if (dense) {
+            DMatrixRMaj b = new DMatrixRMaj(n, 1);
+            System.arraycopy(rhs, 0, b.data, 0, n);
+            DMatrixRMaj x = new DMatrixRMaj(n, 1);
+            denseLu.solve(b, x);
+            return finite(x.data) ? x.data : null;
+        }
+        return substitute(plan, rhs);
     }
 
     private double[] solveDense(double[] rhs, double[] rowScale, double[] colScale) {
@@ -166,9 +197,11 @@ final class LinearStep implements Jacobian.Kept {
             d[rows[k] * n + cols[k]] += vals[k] * colScale[cols[k]] / rowScale[rows[k]];
         }
         LinearSolver<DMatrixRMaj, DMatrixRMaj> lu = LinearSolverFactory_DDRM.lu(n);
+        denseLu = null;
         if (!lu.setA(a)) {
             return null;
         }
+        denseLu = lu;
         DMatrixRMaj b = new DMatrixRMaj(n, 1);
         System.arraycopy(rhs, 0, b.data, 0, n);
         DMatrixRMaj x = new DMatrixRMaj(n, 1);
@@ -222,8 +255,6 @@ final class LinearStep implements Jacobian.Kept {
         for (int t = pl.roleEnd[Plan.ROW], end = pl.roleEnd[Plan.COL]; t < end; t++) {
             colVal[dst[t]] = vals[idx[t]] * sc[t];
         }
-        double[] b = pl.b;
-        System.arraycopy(rhs, 0, b, 0, n);
         int f = 0;
         for (int e = 0; e < pl.elim.length; e++) {
             int k = pl.elim[e];
@@ -233,7 +264,6 @@ final class LinearStep implements Jacobian.Kept {
             }
             for (int c = pl.colStart[e]; c < pl.colStart[e + 1]; c++) {
                 double factor = colVal[c] / d;
-                b[pl.colRow[c]] -= factor * rhs[k];
                 for (int r = pl.rowStart[e]; r < pl.rowStart[e + 1]; r++) {
                     nz[pl.fill[f++]] -= factor * rowVal[r];
                 }
@@ -242,14 +272,38 @@ final class LinearStep implements Jacobian.Kept {
         if (pl.lu == null) {
             pl.lu = new SparseLu(pl.m, pl.colPtr, pl.rowIdx, null);
         }
+        if (!pl.lu.factor(nz)) {
+            return null;
+        }
+        double[] out = substitute(pl, rhs);
+        reusable = out != null;
+        return out;
+    }
+
+    /**
+     * The step for the right-hand side rhs with the plan's condensed matrix as last factorised: condense rhs,
+     * solve for the kept unknowns, then back-substitute the eliminated ones.
+     */
+    private double[] substitute(Plan pl, double[] rhs) {
+        double[] pivot = pl.pivot;
+        double[] rowVal = pl.rowVal;
+        double[] colVal = pl.colVal;
+        double[] b = pl.b;
+        System.arraycopy(rhs, 0, b, 0, n);
+        for (int e = 0; e < pl.elim.length; e++) {
+            int k = pl.elim[e];
+            double rk = rhs[k] / pivot[k];
+            if (rk != 0) {
+                for (int c = pl.colStart[e]; c < pl.colStart[e + 1]; c++) {
+                    b[pl.colRow[c]] -= colVal[c] * rk;
+                }
+            }
+        }
         double[] y = pl.y;
         for (int i = 0; i < n; i++) {
             if (pl.place[i] >= 0) {
                 y[pl.place[i]] = b[i];
             }
-        }
-        if (!pl.lu.factor(nz)) {
-            return null;
         }
         pl.lu.solve(y, y);
         double[] out = new double[n];

@@ -142,13 +142,22 @@ public final class Newton {
                 relaxed = 0;
                 searchOnly = false;
             }
-            if (within(s, f) && alpha * stepNorm <= STEP_TOLERANCE) {
-                if (within(s, f, POLISHED)) {
+            if (within(s, f) && alpha * stepNorm <= CLOSE_STEP) {
+                if (within(s, f, POLISHED) && alpha * stepNorm <= STEP_TOLERANCE) {
                     // already far inside the tolerance: one more step would change only round-off
                     return new Result(x, true, it + 1, null, -1);
                 }
-                double[] last = lin.solve(negScaled(s, f, rowScale), rowScale, colScale);
-                return new Result(last == null ? x : polish(s, x, f, last, colScale, rowScale), true, it + 2, null, -1);
+                // the next step by the last factorisation: from this close it is as good as a new one; when it
+                // is small too, it is the polishing step and Newton is done without factorising again
+                double[] last = lin.canSolveAgain() ? lin.solveAgain(negScaled(s, f, rowScale)) : null;
+                if (last != null && maxAbs(last) <= STEP_TOLERANCE) {
+                    return new Result(polish(s, x, f, last, colScale, rowScale), true, it + 2, null, -1);
+                }
+                if (alpha * stepNorm <= STEP_TOLERANCE) {
+                    last = lin.solve(negScaled(s, f, rowScale), rowScale, colScale);
+                    return new Result(last == null ? x : polish(s, x, f, last, colScale, rowScale), true, it + 2,
+                            null, -1);
+                }
             }
         }
         if (within(s, f)) {
@@ -190,6 +199,11 @@ public final class Newton {
     static final int BULK_ROUNDS = 3;
     /** Most full steps in a row that may raise the merit before going back to the best point. */
     static final int MAX_RELAXED = 6;
+    /**
+     * Largest scaled step after which, with every row within its tolerance, the next step is tried with the
+     * last factorisation to see whether Newton is done.
+     */
+    static final double CLOSE_STEP = 1e-3;
 
     /**
      * The Newton step of the linearised complementarity problem at x: solve with the sides in force, let the
@@ -266,6 +280,14 @@ public final class Newton {
             return xt;
         }
         return x;
+    }
+
+    private static double maxAbs(double[] v) {
+        double m = 0;
+        for (double d : v) {
+            m = Math.max(m, Math.abs(d));
+        }
+        return m;
     }
 
     private static double merit(double[] f, double[] scale) {
