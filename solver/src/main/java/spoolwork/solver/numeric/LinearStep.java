@@ -50,8 +50,7 @@ final class LinearStep implements Jacobian.Kept {
 
 
     void clear() {
-        current.count = 0;
-        current.fitted = false;
+        current.reset();
     }
 
     /** Jacobian entries in the order they arrived; entries for the same place are summed later. */
@@ -62,6 +61,11 @@ final class LinearStep implements Jacobian.Kept {
         int count;
         /** True while no entry has been added since the pattern was last found to fit the plan. */
         boolean fitted;
+        /** Changes whenever entries are added or dropped; rewriting values through set() keeps it. */
+        int generation;
+        /** Indices rewritten through set() with a new value since the last condensation, in order. */
+        int[] rewritten = new int[16];
+        int rewrites;
 
         Triplets(int capacity) {
             rows = new int[capacity];
@@ -75,6 +79,7 @@ final class LinearStep implements Jacobian.Kept {
                 return;
             }
             fitted = false;
+            generation++;
             if (count == rows.length) {
                 rows = Arrays.copyOf(rows, count * 2);
                 cols = Arrays.copyOf(cols, count * 2);
@@ -93,7 +98,25 @@ final class LinearStep implements Jacobian.Kept {
 
         @Override
         public void set(int index, double value) {
+            if (vals[index] == value) {
+                return;
+            }
             vals[index] = value;
+            if (rewrites == rewritten.length && rewrites < count / 4) {
+                rewritten = Arrays.copyOf(rewritten, 2 * rewrites);
+            }
+            if (rewrites < rewritten.length) {
+                rewritten[rewrites] = index;
+            }
+            // past a quarter of the entries only the count goes on: too many to apply one by one
+            rewrites++;
+        }
+
+        void reset() {
+            count = 0;
+            fitted = false;
+            generation++;
+            rewrites = 0;
         }
     }
 
@@ -102,8 +125,7 @@ final class LinearStep implements Jacobian.Kept {
      * Jacobian is kept (by {@link #acceptSpare()}) instead of evaluating the system again there.
      */
     Jacobian spare() {
-        trial.count = 0;
-        trial.fitted = false;
+        trial.reset();
         return trial;
     }
 
@@ -112,8 +134,7 @@ final class LinearStep implements Jacobian.Kept {
         Triplets t = current;
         current = trial;
         trial = t;
-        trial.count = 0;
-        trial.fitted = false;
+        trial.reset();
     }
 
     @Override
@@ -128,7 +149,7 @@ final class LinearStep implements Jacobian.Kept {
 
     @Override
     public void set(int index, double value) {
-        current.vals[index] = value;
+        current.set(index, value);
     }
 
     /**
@@ -231,6 +252,13 @@ final class LinearStep implements Jacobian.Kept {
         current.fitted = true;
         Plan pl = plan;
         pl.checked = current;
+        double[] sc = pl.scales(rows, cols, rowScale, colScale);
+        if (pl.condensed == current && pl.condensedGeneration == current.generation && pl.scalesKept
+                && pl.update(current)) {
+            current.rewrites = 0;
+            return factorAndSubstitute(pl, rhs);
+        }
+        pl.condensed = null;
         double[] pivot = pl.pivot;
         double[] rowVal = pl.rowVal;
         double[] colVal = pl.colVal;
@@ -241,7 +269,6 @@ final class LinearStep implements Jacobian.Kept {
         // colScale/rowScale of each entry is kept while the scales stay the same
         int[] idx = pl.byRole;
         int[] dst = pl.byRoleDest;
-        double[] sc = pl.scales(rows, cols, rowScale, colScale);
         for (int t = 0, end = pl.roleEnd[Plan.KEPT]; t < end; t++) {
             nz[dst[t]] += vals[idx[t]] * sc[t];
         }
@@ -269,10 +296,18 @@ final class LinearStep implements Jacobian.Kept {
                 }
             }
         }
+        pl.condensed = current;
+        pl.condensedGeneration = current.generation;
+        current.rewrites = 0;
+        System.arraycopy(vals, 0, pl.condensedValues, 0, count);
+        return factorAndSubstitute(pl, rhs);
+    }
+
+    private double[] factorAndSubstitute(Plan pl, double[] rhs) {
         if (pl.lu == null) {
             pl.lu = new SparseLu(pl.m, pl.colPtr, pl.rowIdx, null);
         }
-        if (!pl.lu.factor(nz)) {
+        if (!pl.lu.factor(pl.values)) {
             return null;
         }
         double[] out = substitute(pl, rhs);
@@ -344,13 +379,72 @@ final class LinearStep implements Jacobian.Kept {
         int[] roleEnd;
         /** The entries last found to fit this plan (valid while they report no additions). */
         Triplets checked;
+        /**
+         * The entries whose values the condensed matrix holds, at which generation, and those values: when
+         * only entries of kept rows were rewritten since (a complementarity row changing side), the condensed
+         * matrix is brought up to date entry by entry instead of condensed again.
+         */
+        Triplets condensed;
+        int condensedGeneration;
+        double[] condensedValues;
+        /** Slot of each entry in byRole order. */
+        int[] slotOf;
+        /** True when the last call of scales() found the scales the same as before. */
+        boolean scalesKept;
+
+        /**
+         * Applies the entries rewritten since the condensation to the condensed matrix; false (and nothing
+         * changed) when one of them is in the row of an eliminated unknown, or there are too many to track.
+         */
+        boolean update(Triplets t) {
+            if (t.rewrites > t.rewritten.length) {
+                return false;
+            }
+            int keptEnd = roleEnd[KEPT];
+            int pivotEnd = roleEnd[PIVOT];
+            int rowEnd = roleEnd[ROW];
+            for (int r = 0; r < t.rewrites; r++) {
+                int slot = slotOf[t.rewritten[r]];
+                if (slot >= keptEnd && slot < rowEnd) {
+                    return false;
+                }
+            }
+            double[] sc = byRoleScale;
+            for (int r = 0; r < t.rewrites; r++) {
+                int k = t.rewritten[r];
+                int slot = slotOf[k];
+                double v = t.vals[k] * sc[slot];
+                double old = condensedValues[k] * sc[slot];
+                condensedValues[k] = t.vals[k];
+                if (slot < keptEnd) {
+                    values[byRoleDest[slot]] += v - old;
+                    continue;
+                }
+                // a kept row's entry in an eliminated column: its share of the fill changes with it
+                int c = byRoleDest[slot];
+                int e = colOwner[c];
+                double change = (v - colVal[c]) / pivot[elim[e]];
+                colVal[c] = v;
+                int f = fillAt[c];
+                for (int q = rowStart[e]; q < rowStart[e + 1]; q++) {
+                    values[fill[f++]] -= change * rowVal[q];
+                }
+            }
+            return true;
+        }
+
+        /** For each column slot: the eliminated unknown it belongs to, and where its fill entries start. */
+        int[] colOwner;
+        int[] fillAt;
         /** colScale[col] / rowScale[row] of each entry in byRole order, for the scales last seen. */
         private double[] byRoleScale;
         private double[] rowScaleSeen;
         private double[] colScaleSeen;
 
         double[] scales(int[] rows, int[] cols, double[] rowScale, double[] colScale) {
-            if (byRoleScale == null || !Arrays.equals(rowScale, rowScaleSeen) || !Arrays.equals(colScale, colScaleSeen)) {
+            scalesKept = byRoleScale != null && Arrays.equals(rowScale, rowScaleSeen)
+                    && Arrays.equals(colScale, colScaleSeen);
+            if (!scalesKept) {
                 rowScaleSeen = rowScale.clone();
                 colScaleSeen = colScale.clone();
                 byRoleScale = new double[byRole.length];
@@ -565,11 +659,25 @@ final class LinearStep implements Jacobian.Kept {
             for (int s = 0; s < keptEntries; s++) {
                 p.byRoleDest[s] = finalOf[uniqueOf[s]];
             }
+            p.colOwner = new int[p.colSlots];
+            p.fillAt = new int[p.colSlots];
+            for (int e = 0, f = 0; e < ne; e++) {
+                for (int c = cc[e]; c < cc[e + 1]; c++) {
+                    p.colOwner[c] = e;
+                    p.fillAt[c] = f;
+                    f += rc[e + 1] - rc[e];
+                }
+            }
             p.fill = new int[fills];
             for (int f = 0; f < fills; f++) {
                 p.fill[f] = finalOf[uniqueOf[keptEntries + f]];
             }
             p.values = new double[unique];
+            p.condensedValues = new double[count];
+            p.slotOf = new int[count];
+            for (int slot = 0; slot < count; slot++) {
+                p.slotOf[p.byRole[slot]] = slot;
+            }
             p.pivot = new double[n];
             p.rowVal = new double[p.rowSlots];
             p.colVal = new double[p.colSlots];
