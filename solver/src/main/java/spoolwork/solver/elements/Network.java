@@ -212,9 +212,25 @@ public final class Network implements NonlinearSystem {
     private double[][] gradA;
     private double[][] gradB;
 
+    /** The complementarity rows, in order; the loops over sides visit only these. */
+    private int[] pairRows;
+
     private void pairs() {
         if (side == null) {
             int n = size();
+            int m = 0;
+            for (int i = 0; i < n; i++) {
+                if (kinds[i] == Kind.COMPLEMENTARITY) {
+                    m++;
+                }
+            }
+            pairRows = new int[m];
+            m = 0;
+            for (int i = 0; i < n; i++) {
+                if (kinds[i] == Kind.COMPLEMENTARITY) {
+                    pairRows[m++] = i;
+                }
+            }
             side = new byte[n];
             java.util.Arrays.fill(side, (byte) -1);
             pairA = new double[n];
@@ -276,7 +292,7 @@ public final class Network implements NonlinearSystem {
         if (side == null) {
             return true;
         }
-        for (int row = 0; row < side.length; row++) {
+        for (int row : pairRows) {
             if (side[row] < 0 || pairCols[row] == null) {
                 continue;
             }
@@ -298,7 +314,9 @@ public final class Network implements NonlinearSystem {
     @Override
     public void beginRun() {
         if (side != null) {
-            java.util.Arrays.fill(side, (byte) -1);
+            for (int row : pairRows) {
+                side[row] = -1;
+            }
         }
     }
 
@@ -318,11 +336,13 @@ public final class Network implements NonlinearSystem {
         if (previousSide == null) {
             previousSide = new byte[side.length];
         }
-        System.arraycopy(side, 0, previousSide, 0, side.length);
+        for (int i : pairRows) {
+            previousSide[i] = side[i];
+        }
         int switched = 0;
         int worst = -1;
         double worstValue = 0;
-        for (int i = 0; i < side.length; i++) {
+        for (int i : pairRows) {
             if (side[i] < 0 || pairCols[i] == null) {
                 continue;
             }
@@ -359,7 +379,9 @@ public final class Network implements NonlinearSystem {
     @Override
     public void undoSwitch() {
         if (previousSide != null) {
-            System.arraycopy(previousSide, 0, side, 0, side.length);
+            for (int i : pairRows) {
+                side[i] = previousSide[i];
+            }
         }
     }
 
