@@ -194,6 +194,7 @@ final class SparseLu {
      */
     private boolean pivotingFactor(double[] values, int from) {
         fresh++;
+        rowPlaceValid = false;
         boolean reuse = factored;
         if (reuse) {
             saveOld(from);
@@ -425,6 +426,17 @@ final class SparseLu {
      * @return −1 when done, else the first column whose pivot failed the test
      */
     private int refactor(double[] values) {
+        if (rowPlace == null) {
+            rowPlace = new int[ap[n]];
+        }
+        if (!rowPlaceValid) {
+            for (int p = 0; p < ap[n]; p++) {
+                rowPlace[p] = pinv[ai[p]];
+            }
+            rowPlaceValid = true;
+        }
+        int[] place = rowPlace;
+        // x is all zero between columns: each column clears what it wrote as it reads it back
         for (int k = 0; k < n; k++) {
             int col = q[k];
             int diag = up[k + 1] - 1;
@@ -447,27 +459,26 @@ final class SparseLu {
             if (!ch) {
                 continue;
             }
-            for (int p = up[k]; p < up[k + 1]; p++) {
-                x[ui[p]] = 0;
-            }
-            for (int p = lp[k]; p < lp[k + 1]; p++) {
-                x[li[p]] = 0;
-            }
             double big = 0;
             for (int p = ap[col]; p < ap[col + 1]; p++) {
-                x[pinv[ai[p]]] = values[p];
-                big = Math.max(big, Math.abs(values[p]));
+                double v = values[p];
+                x[place[p]] = v;
+                big = Math.max(big, Math.abs(v));
             }
             for (int p = up[k]; p < diag; p++) {
                 int j = ui[p];
                 double xj = x[j];
+                x[j] = 0;
                 ux[p] = xj;
                 big = Math.max(big, Math.abs(xj));
-                for (int t = lp[j] + 1; t < lp[j + 1]; t++) {
-                    x[li[t]] -= lx[t] * xj;
+                if (xj != 0) {
+                    for (int t = lp[j] + 1; t < lp[j + 1]; t++) {
+                        x[li[t]] -= lx[t] * xj;
+                    }
                 }
             }
             double pivot = x[k];
+            x[k] = 0;
             double best = Math.abs(pivot);
             for (int t = lp[k] + 1; t < lp[k + 1]; t++) {
                 best = Math.max(best, Math.abs(x[li[t]]));
@@ -478,12 +489,19 @@ final class SparseLu {
                 return k;
             }
             ux[diag] = pivot;
+            double inverse = 1 / pivot;
             for (int t = lp[k] + 1; t < lp[k + 1]; t++) {
-                lx[t] = x[li[t]] / pivot;
+                int i = li[t];
+                lx[t] = x[i] * inverse;
+                x[i] = 0;
             }
         }
         return -1;
     }
+
+    /** Pivot position of the row of each stored entry of A, for the current pivot order. */
+    private int[] rowPlace;
+    private boolean rowPlaceValid;
 
     /**
      * Solves A·out = b with the last successful factorisation; b and out may be the same array. Uses only
