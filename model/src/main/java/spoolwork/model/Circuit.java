@@ -29,6 +29,10 @@ public final class Circuit {
     private final Map<String, Line> lines;
     private final Map<String, Note> notes;
     private final List<OperatingState> states;
+    /** The same components, junctions and lines in drawing order as lists, which iterate faster than maps. */
+    private final List<Component> componentList;
+    private final List<Junction> junctionList;
+    private final List<Line> lineList;
 
     public Circuit(TitleBlock title, Fluid fluid, Collection<Component> components, Collection<Junction> junctions,
                    Collection<Line> lines, Collection<Note> notes, List<OperatingState> states) {
@@ -39,6 +43,9 @@ public final class Circuit {
         this.junctions = index(junctions, Junction::id, ids);
         this.lines = index(lines, Line::id, ids);
         this.notes = index(notes, Note::id, ids);
+        this.componentList = List.copyOf(this.components.values());
+        this.junctionList = List.copyOf(this.junctions.values());
+        this.lineList = List.copyOf(this.lines.values());
         this.states = List.copyOf(states);
         check();
     }
@@ -237,15 +244,15 @@ public final class Circuit {
 
     /** Components in drawing order (unmodifiable view). */
     public Collection<Component> components() {
-        return components.values();
+        return componentList;
     }
 
     public Collection<Junction> junctions() {
-        return junctions.values();
+        return junctionList;
     }
 
     public Collection<Line> lines() {
-        return lines.values();
+        return lineList;
     }
 
     public Collection<Note> notes() {
