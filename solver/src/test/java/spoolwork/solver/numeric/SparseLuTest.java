@@ -441,7 +441,7 @@ class SparseLuTest {
     @Test
     void aWeakKeptPivotKeepsTheOrderAndASmallResidual() {
         // [[d, 1], [1, 0]] after [[2, 1], [1, 0]]: with d = 1e-7 the kept diagonal pivot is below the search's
-        // 1e-3 but above the refactorisation's 1e-9, so the order stays; L then holds 1/d = 1e7, and x0 comes
+        // 1e-6 but above the refactorisation's 1e-9, so the order stays; L then holds 1/d = 1e7, and x0 comes
         // out of a cancellation 1 − x1 that costs it about seven digits, yet the residual stays small
         int[] colPtr = {0, 2, 4};
         int[] rowIdx = {0, 1, 0, 1};
