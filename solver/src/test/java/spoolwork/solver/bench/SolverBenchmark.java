@@ -30,7 +30,7 @@ import spoolwork.solver.sample.CircuitGenerator;
  */
 @State(Scope.Benchmark)
 @Fork(value = 1, jvmArgs = {"-Xmx2g"})
-@Warmup(iterations = 3, time = 1)
+@Warmup(iterations = 5, time = 2)
 @Measurement(iterations = 5, time = 3)
 @BenchmarkMode(Mode.SampleTime)
 @OutputTimeUnit(TimeUnit.MILLISECONDS)
