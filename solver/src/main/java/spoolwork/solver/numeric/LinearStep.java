@@ -33,9 +33,9 @@ final class LinearStep implements Jacobian.Kept {
 
     LinearStep(int n, LinearMethod method, NonlinearSystem s) {
         this.n = n;
-        // about six entries per unknown in these systems; the buffers grow if need be
-        this.current = new Triplets(Math.max(256, 6 * n));
-        this.trial = new Triplets(Math.max(256, 6 * n));
+        // generated circuits have 3.6 entries per unknown; the buffers grow if need be
+        this.current = new Triplets(Math.max(256, 4 * n));
+        this.trial = new Triplets(Math.max(256, 4 * n));
         this.dense = method == LinearMethod.DENSE || (method == LinearMethod.AUTO && n <= LinearMethod.DENSE_LIMIT);
         this.eliminable = new boolean[n];
         this.delayed = new boolean[n];

@@ -33,6 +33,9 @@ public final class Newton {
         double[] f = new double[n];
         double[] xt = new double[n];
         double[] ft = new double[n];
+        // work arrays of the steps: the step in unknowns' units, and the right-hand side
+        double[] dir = new double[n];
+        double[] rhs = new double[n];
         double[] rowScale = rowScales(s);
         double[] colScale = unknownScales(s);
         LinearStep lin = new LinearStep(n, method, s);
@@ -53,7 +56,7 @@ public final class Newton {
             if (System.nanoTime() > deadlineNanos) {
                 return new Result(x, false, it, "time limit reached", worst(s, f));
             }
-            double[] y = activeSetStep(s, x, f, lin, rowScale, colScale);
+            double[] y = activeSetStep(s, x, f, lin, rowScale, colScale, dir, rhs);
             if (y == null) {
                 if (within(s, f)) {
                     return new Result(x, true, it, null, -1);
@@ -61,7 +64,6 @@ public final class Newton {
                 return new Result(x, false, it, "singular Jacobian", worst(s, f));
             }
             double stepNorm = 0;
-            double[] dir = new double[n];
             for (int i = 0; i < n; i++) {
                 stepNorm = Math.max(stepNorm, Math.abs(y[i]));
                 double dx = y[i] * colScale[i];
@@ -149,12 +151,12 @@ public final class Newton {
                 }
                 // the next step by the last factorisation: from this close it is as good as a new one; when it
                 // is small too, it is the polishing step and Newton is done without factorising again
-                double[] last = lin.canSolveAgain() ? lin.solveAgain(negScaled(s, f, rowScale)) : null;
+                double[] last = lin.canSolveAgain() ? lin.solveAgain(negScaled(s, f, rowScale, rhs)) : null;
                 if (last != null && maxAbs(last) <= STEP_TOLERANCE) {
                     return new Result(polish(s, x, f, last, colScale, rowScale), true, it + 2, null, -1);
                 }
                 if (alpha * stepNorm <= STEP_TOLERANCE) {
-                    last = lin.solve(negScaled(s, f, rowScale), rowScale, colScale);
+                    last = lin.solve(negScaled(s, f, rowScale, rhs), rowScale, colScale);
                     return new Result(last == null ? x : polish(s, x, f, last, colScale, rowScale), true, it + 2,
                             null, -1);
                 }
@@ -186,7 +188,11 @@ public final class Newton {
 
     /** Right-hand side of the scaled Newton step: −F/rowScale, complementarity rows on their side in force. */
     static double[] negScaled(NonlinearSystem s, double[] f, double[] rowScale) {
-        double[] r = new double[f.length];
+        return negScaled(s, f, rowScale, new double[f.length]);
+    }
+
+    /** The same, written into r (returned). */
+    static double[] negScaled(NonlinearSystem s, double[] f, double[] rowScale, double[] r) {
         for (int i = 0; i < f.length; i++) {
             r[i] = -s.stepResidual(i, f) / rowScale[i];
         }
@@ -210,16 +216,15 @@ public final class Newton {
      * system move every row whose other side the step would make negative, evaluate the Jacobian again and
      * repeat until no side changes (or {@link #MAX_SIDE_ROUNDS}). A closed valve thus opens within the step
      * that raises its inlet past the setting, instead of the step overshooting and being cut back.
-     * Returns the scaled step, or null when the matrix is singular.
+     * Returns the scaled step, or null when the matrix is singular; dx and rhs are work arrays of length n.
      */
     private static double[] activeSetStep(NonlinearSystem s, double[] x, double[] f, LinearStep lin,
-                                          double[] rowScale, double[] colScale) {
+                                          double[] rowScale, double[] colScale, double[] dx, double[] rhs) {
         int n = x.length;
-        double[] dx = new double[n];
         double[] last = null;
         boolean onlyWorst = false;
         for (int round = 0; ; round++) {
-            double[] y = lin.solve(negScaled(s, f, rowScale), rowScale, colScale);
+            double[] y = lin.solve(negScaled(s, f, rowScale, rhs), rowScale, colScale);
             if (y == null) {
                 if (last == null) {
                     return null;
