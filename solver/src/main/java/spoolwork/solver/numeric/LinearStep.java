@@ -16,8 +16,8 @@ import org.ejml.dense.row.factory.LinearSolverFactory_DDRM;
 /**
  * Collects Jacobian entries of one Newton iteration and solves J·dx = b for the step, in scaled units.
  * The sparse path condenses the system, numbers the kept unknowns once per sparsity pattern (minimum degree
- * by default) and factors with {@link SparseLu}, which reuses its pivot order and patterns from one
- * iteration to the next. The fallback for systems that cannot be condensed uses EJML's sparse LU with
+ * by default, whose elimination also gives the patterns of L and U for the first factorisation) and factors
+ * with {@link SparseLu}, which reuses its pivot order and patterns from one iteration to the next. The fallback for systems that cannot be condensed uses EJML's sparse LU with
  * {@link FillReducing#NONE} after reverse Cuthill–McKee: EJML's own orderings are not safe with its LU.
  */
 final class LinearStep implements Jacobian.Kept {
@@ -305,7 +305,8 @@ final class LinearStep implements Jacobian.Kept {
 
     private double[] factorAndSubstitute(Plan pl, double[] rhs) {
         if (pl.lu == null) {
-            pl.lu = new SparseLu(pl.m, pl.colPtr, pl.rowIdx, null);
+            pl.lu = pl.lStart == null ? new SparseLu(pl.m, pl.colPtr, pl.rowIdx, null)
+                    : new SparseLu(pl.m, pl.colPtr, pl.rowIdx, pl.lStart, pl.lRows);
         }
         if (!pl.lu.factor(pl.values)) {
             return null;
@@ -474,6 +475,9 @@ final class LinearStep implements Jacobian.Kept {
         double[] b;
         double[] y;
         SparseLu lu;
+        /** Pattern of L found by the minimum degree elimination (see Ordering.Elimination); null for RCM. */
+        int[] lStart;
+        int[] lRows;
 
         boolean fits(int[] rows, int[] cols, int count) {
             return count == rowsSeen.length && Arrays.equals(rows, 0, count, rowsSeen, 0, count)
@@ -611,17 +615,39 @@ final class LinearStep implements Jacobian.Kept {
                 }
             }
             uStart[m] = unique;
+            // unknowns numbered after a neighbour: complementarity ones, and those whose own row does not hold
+            // them (an actuator's velocity appears only in its nodes' flow balances), so that eliminating the
+            // neighbour first fills in their diagonal and the first factorisation can pivot on it
             boolean[] keptDelayed = new boolean[m];
             for (int i = 0; i < n; i++) {
                 if (kept[i] >= 0) {
-                    keptDelayed[kept[i]] = delayed[i];
+                    keptDelayed[kept[i]] = true;
                 }
             }
+            for (int u = 0; u < unique; u++) {
+                if (uRow[u] == uCol[u]) {
+                    keptDelayed[uRow[u]] = false;
+                }
+            }
+            for (int i = 0; i < n; i++) {
+                if (kept[i] >= 0 && delayed[i]) {
+                    keptDelayed[kept[i]] = true;
+                }
+            }
+            Ordering.Elimination elimination = band ? null : new Ordering.Elimination();
             int[] perm = band ? Ordering.reverseCuthillMcKee(m, uRow, uCol, unique)
-                    : Ordering.minimumDegree(m, uRow, uCol, unique, keptDelayed);
+                    : Ordering.minimumDegree(m, uRow, uCol, unique, keptDelayed, elimination);
             int[] inverse = new int[m];
             for (int i = 0; i < m; i++) {
                 inverse[perm[i]] = i;
+            }
+            if (elimination != null) {
+                // the elimination's pattern of L, in the new numbering, for the first factorisation
+                p.lStart = elimination.start;
+                p.lRows = elimination.rows;
+                for (int q = 0; q < p.lStart[m]; q++) {
+                    p.lRows[q] = inverse[p.lRows[q]];
+                }
             }
             p.place = new int[n];
             for (int i = 0; i < n; i++) {

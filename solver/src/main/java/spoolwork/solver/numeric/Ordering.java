@@ -92,6 +92,23 @@ final class Ordering {
      * diagonal is non-zero on both sides, so one pivot order serves whichever side the row is on.
      */
     static int[] minimumDegree(int n, int[] rows, int[] cols, int count, boolean[] delayed) {
+        return minimumDegree(n, rows, cols, count, delayed, null);
+    }
+
+    /**
+     * What the elimination of {@link #minimumDegree} found besides the order: the neighbours each node had
+     * when it was eliminated, which are the rows of its column of L (and the columns of its row of U) in
+     * an LU factorisation along that order with diagonal pivots, for the pattern of A + Aᵀ.
+     */
+    static final class Elimination {
+        /** Neighbours of the k-th eliminated node are rows[start[k] .. start[k + 1]), in the old numbering. */
+        int[] start;
+        int[] rows;
+    }
+
+    /** The same, also recording the elimination's pattern into {@code pattern} when it is not null. */
+    static int[] minimumDegree(int n, int[] rows, int[] cols, int count, boolean[] delayed,
+                               Elimination pattern) {
         int[] len = new int[n];
         for (int k = 0; k < count; k++) {
             int r = rows[k];
@@ -149,6 +166,9 @@ final class Ordering {
             }
         }
         int[] perm = new int[n];
+        int[] patternStart = pattern == null ? null : new int[n + 1];
+        int[] patternRows = pattern == null ? null : new int[Math.max(16, count)];
+        int patternSize = 0;
         int minDegree = 0;
         for (int k = 0; k < n; k++) {
             while (minDegree < n && head[minDegree] < 0) {
@@ -171,6 +191,14 @@ final class Ordering {
             perm[k] = v;
             int[] nv = adj[v];
             int lv = len[v];
+            if (pattern != null) {
+                if (patternSize + lv > patternRows.length) {
+                    patternRows = Arrays.copyOf(patternRows, Math.max(2 * patternRows.length, patternSize + lv));
+                }
+                patternStart[k] = patternSize;
+                System.arraycopy(nv, 0, patternRows, patternSize, lv);
+                patternSize += lv;
+            }
             // v's neighbours carry vStamp, so that a neighbour already joined to all the others (usual after
             // condensation) only loses v, without a second pass
             int vStamp = ++stamp;
@@ -226,6 +254,11 @@ final class Ordering {
                 }
             }
             adj[v] = null;
+        }
+        if (pattern != null) {
+            patternStart[n] = patternSize;
+            pattern.start = patternStart;
+            pattern.rows = patternRows;
         }
         return perm;
     }

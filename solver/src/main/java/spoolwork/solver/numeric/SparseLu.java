@@ -142,6 +142,86 @@ final class SparseLu {
         ux = new double[guess];
     }
 
+    /**
+     * A factorisation that starts from a known pattern: {@code lRows[lStart[k] .. lStart[k + 1])} are the rows
+     * below the diagonal of column k of L for diagonal pivots in the natural column order (all greater than
+     * k), a superset of what the elimination fills in, such as a minimum degree elimination of A + Aᵀ
+     * records. U's pattern is its transpose. The first {@link #factor} then does only the arithmetic of a
+     * refactorisation, without the search for reach and pivots, and searches only from a column whose
+     * diagonal pivot fails the refactorisation's threshold.
+     */
+    SparseLu(int n, int[] colPtr, int[] rowIdx, int[] lStart, int[] lRows) {
+        this(n, colPtr, rowIdx, null);
+        if (lStart.length != n + 1 || lStart[0] != 0) {
+            throw new IllegalArgumentException("sparse LU: pattern of L does not describe " + n + " columns");
+        }
+        int below = lStart[n];
+        int[] uCount = new int[n];
+        for (int k = 0; k < n; k++) {
+            for (int t = lStart[k]; t < lStart[k + 1]; t++) {
+                int r = lRows[t];
+                if (r <= k || r >= n) {
+                    throw new IllegalArgumentException(
+                            "sparse LU: row " + r + " of column " + k + " of L is not below the diagonal");
+                }
+                uCount[r]++;
+            }
+        }
+        li = new int[below + n];
+        lx = new double[below + n];
+        ui = new int[below + n];
+        ux = new double[below + n];
+        int pos = 0;
+        for (int k = 0; k < n; k++) {
+            lp[k] = pos;
+            li[pos++] = k;
+            for (int t = lStart[k]; t < lStart[k + 1]; t++) {
+                li[pos++] = lRows[t];
+            }
+        }
+        lp[n] = pos;
+        // U(:, r) holds the columns k < r whose L has row r, in increasing order (an order valid for the
+        // forward elimination), then its diagonal
+        int[] next = new int[n];
+        pos = 0;
+        for (int r = 0; r < n; r++) {
+            up[r] = pos;
+            next[r] = pos;
+            pos += uCount[r] + 1;
+            ui[pos - 1] = r;
+        }
+        up[n] = pos;
+        for (int k = 0; k < n; k++) {
+            for (int t = lStart[k]; t < lStart[k + 1]; t++) {
+                ui[next[lRows[t]]++] = k;
+            }
+        }
+        // the pattern must hold every entry of A, else the arithmetic would leave values behind in x
+        int[] seen = new int[n];
+        Arrays.fill(seen, -1);
+        for (int k = 0; k < n; k++) {
+            for (int p = lp[k]; p < lp[k + 1]; p++) {
+                seen[li[p]] = k;
+            }
+            for (int p = up[k]; p < up[k + 1]; p++) {
+                seen[ui[p]] = k;
+            }
+            for (int p = ap[k]; p < ap[k + 1]; p++) {
+                if (seen[ai[p]] != k) {
+                    throw new IllegalArgumentException("sparse LU: entry (" + ai[p] + ", " + k
+                            + ") of A lies outside the given pattern of L and U");
+                }
+            }
+        }
+        for (int k = 0; k < n; k++) {
+            pinv[k] = k;
+            prow[k] = k;
+        }
+        // every column counts as changed, so the first factorisation computes them all
+        Arrays.fill(last, Double.NaN);
+        factored = true;
+    }
+
     int size() {
         return n;
     }

@@ -465,6 +465,84 @@ class SparseLuTest {
     }
 
     @Test
+    void aPatternFromTheEliminationFactorsWithoutSearching() {
+        for (long seed = 0; seed < 5; seed++) {
+            // a circuit-like block and 20 constraint rows on distinct nodes, each tied both ways to its node,
+            // with a zero diagonal (as a valve's margin row on its open side)
+            int nodes = 200;
+            Sparse block = circuitLike(nodes, 0, false, 300 + seed);
+            int n = nodes + 20;
+            Sparse a = new Sparse(n);
+            a.entries.putAll(block.entries.entrySet().stream().collect(java.util.stream.Collectors.toMap(
+                    e -> e.getKey() / nodes * n + e.getKey() % nodes, Map.Entry::getValue)));
+            for (int c = 0; c < 20; c++) {
+                int node = 7 * c + 3;
+                a.add(nodes + c, node, 1.5);
+                a.add(node, nodes + c, 1);
+                a.set(nodes + c, nodes + c, 0);
+            }
+            int[] rows = a.rowIdx();
+            int[] cols = new int[rows.length];
+            int[] p = a.colPtr();
+            for (int j = 0; j < n; j++) {
+                Arrays.fill(cols, p[j], p[j + 1], j);
+            }
+            // the constraint unknowns have a zero diagonal: numbered after a neighbour, as the solver does
+            boolean[] delayed = new boolean[n];
+            Arrays.fill(delayed, nodes, n, true);
+            Ordering.Elimination elimination = new Ordering.Elimination();
+            int[] perm = Ordering.minimumDegree(n, rows, cols, rows.length, delayed, elimination);
+            int[] inverse = new int[n];
+            for (int i = 0; i < n; i++) {
+                inverse[perm[i]] = i;
+            }
+            Sparse b = new Sparse(n);
+            for (Map.Entry<Long, Double> e : a.entries.entrySet()) {
+                b.add(inverse[(int) (e.getKey() % n)], inverse[(int) (e.getKey() / n)], e.getValue());
+            }
+            int[] lRows = Arrays.copyOf(elimination.rows, elimination.start[n]);
+            for (int t = 0; t < lRows.length; t++) {
+                lRows[t] = inverse[lRows[t]];
+            }
+            SparseLu lu = new SparseLu(n, b.colPtr(), b.rowIdx(), elimination.start, lRows);
+            assertTrue(lu.factor(b.values()), "seed " + seed);
+            assertEquals(0, lu.pivotingFactorisations(), "seed " + seed + ": every diagonal pivot passes");
+            double[] rhs = randomVector(n, seed);
+            double[] x = new double[n];
+            lu.solve(rhs, x);
+            assertTrue(backwardError(b, x, rhs) <= BACKWARD_ERROR, "seed " + seed);
+            double[] reference = denseSolve(b, rhs);
+            double scale = Arrays.stream(reference).map(Math::abs).max().orElse(1);
+            for (int i = 0; i < n; i++) {
+                assertEquals(reference[i], x[i], 1e-9 * scale, "seed " + seed + " unknown " + i);
+            }
+            // the first column's other entries grown a million million times dwarf its diagonal pivot (an
+            // entry of A itself) past the threshold: the search takes over
+            Sparse changed = new Sparse(n);
+            for (Map.Entry<Long, Double> e : b.entries.entrySet()) {
+                boolean below = e.getKey() / n == 0 && e.getKey() % n != 0;
+                changed.entries.put(e.getKey(), below ? 1e12 * e.getValue() : e.getValue());
+            }
+            assertTrue(lu.factor(changed.values()), "seed " + seed);
+            assertEquals(1, lu.pivotingFactorisations(), "seed " + seed);
+            lu.solve(rhs, x);
+            assertTrue(backwardError(changed, x, rhs) <= BACKWARD_ERROR, "seed " + seed);
+        }
+    }
+
+    @Test
+    void aPatternThatMissesAnEntryOfTheMatrixIsRejected() {
+        // [[1, 1], [1, 1]] with nothing below the diagonal of L: entry (1, 0) has no place
+        int[] colPtr = {0, 2, 4};
+        int[] rowIdx = {0, 1, 0, 1};
+        assertThrows(IllegalArgumentException.class,
+                () -> new SparseLu(2, colPtr, rowIdx, new int[] {0, 0, 0}, new int[0]));
+        assertThrows(IllegalArgumentException.class,
+                () -> new SparseLu(2, colPtr, rowIdx, new int[] {0, 1, 1}, new int[] {0}), "row not below");
+        new SparseLu(2, colPtr, rowIdx, new int[] {0, 1, 1}, new int[] {1});
+    }
+
+    @Test
     void singularMatricesAreReported() {
         // an empty column
         assertFalse(new SparseLu(2, new int[] {0, 2, 2}, new int[] {0, 1}, null).factor(new double[] {1, 2}));
