@@ -321,11 +321,16 @@ public final class Network implements NonlinearSystem {
     }
 
     @Override
-    public double stepResidual(int i, double[] f) {
-        if (kind(i) != Kind.COMPLEMENTARITY || side == null || side[i] < 0) {
-            return f[i];
+    public void stepResiduals(double[] f, double[] out) {
+        System.arraycopy(f, 0, out, 0, f.length);
+        if (side == null) {
+            return;
         }
-        return side[i] == 0 ? pairA[i] : pairB[i];
+        for (int i : pairRows) {
+            if (side[i] >= 0) {
+                out[i] = side[i] == 0 ? pairA[i] : pairB[i];
+            }
+        }
     }
 
     @Override

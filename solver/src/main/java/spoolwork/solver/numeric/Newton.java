@@ -193,8 +193,9 @@ public final class Newton {
 
     /** The same, written into r (returned). */
     static double[] negScaled(NonlinearSystem s, double[] f, double[] rowScale, double[] r) {
+        s.stepResiduals(f, r);
         for (int i = 0; i < f.length; i++) {
-            r[i] = -s.stepResidual(i, f) / rowScale[i];
+            r[i] = -r[i] / rowScale[i];
         }
         return r;
     }

@@ -41,11 +41,11 @@ public interface NonlinearSystem {
     }
 
     /**
-     * The value row i takes in the Newton step's right-hand side: F[i] itself, except for a
-     * complementarity row, where it is the side in force (F[i] is min of both sides there).
+     * The values the rows take in the Newton step's right-hand side, into out: F itself, except for a
+     * complementarity row, where it is the side in force (F there is the min of both sides).
      */
-    default double stepResidual(int i, double[] f) {
-        return f[i];
+    default void stepResiduals(double[] f, double[] out) {
+        System.arraycopy(f, 0, out, 0, f.length);
     }
 
     /**
