@@ -89,6 +89,12 @@ final class SparseLu {
      * @param order  column order Q (order[k] = column of A taken k-th), or null for the natural order
      */
     SparseLu(int n, int[] colPtr, int[] rowIdx, int[] order) {
+        // L and U of these matrices hold about as many entries as A each; the arrays grow when need be
+        this(n, colPtr, rowIdx, order, colPtr.length == n + 1 ? Math.max(0, colPtr[n]) + 2 * n : 0);
+    }
+
+    /** As above, with room for the given number of entries in each of L and U. */
+    private SparseLu(int n, int[] colPtr, int[] rowIdx, int[] order, int factorCapacity) {
         if (colPtr.length != n + 1 || colPtr[0] != 0 || colPtr[n] > rowIdx.length) {
             throw new IllegalArgumentException("sparse LU: column starts do not describe " + n + " columns");
         }
@@ -132,14 +138,12 @@ final class SparseLu {
         last = new double[ap[n]];
         changed = new boolean[n];
         same = new boolean[n];
-        // L and U of these matrices hold about as many entries as A each; the arrays grow when need be
-        int guess = ap[n] + 2 * n;
         lp = new int[n + 1];
         up = new int[n + 1];
-        li = new int[guess];
-        lx = new double[guess];
-        ui = new int[guess];
-        ux = new double[guess];
+        li = new int[factorCapacity];
+        lx = new double[factorCapacity];
+        ui = new int[factorCapacity];
+        ux = new double[factorCapacity];
     }
 
     /**
@@ -151,7 +155,7 @@ final class SparseLu {
      * diagonal pivot fails the refactorisation's threshold.
      */
     SparseLu(int n, int[] colPtr, int[] rowIdx, int[] lStart, int[] lRows) {
-        this(n, colPtr, rowIdx, null);
+        this(n, colPtr, rowIdx, null, 0);
         if (lStart.length != n + 1 || lStart[0] != 0) {
             throw new IllegalArgumentException("sparse LU: pattern of L does not describe " + n + " columns");
         }
