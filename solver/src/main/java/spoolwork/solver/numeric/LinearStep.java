@@ -324,29 +324,29 @@ final class LinearStep implements Jacobian.Kept {
         double[] pivot = pl.pivot;
         double[] rowVal = pl.rowVal;
         double[] colVal = pl.colVal;
-        double[] b = pl.b;
-        System.arraycopy(rhs, 0, b, 0, n);
+        int[] keptIndex = pl.keptIndex;
+        int m = pl.m;
+        double[] y = pl.y;
+        for (int j = 0; j < m; j++) {
+            y[j] = rhs[keptIndex[j]];
+        }
+        int[] colRowPlace = pl.colRowPlace;
         for (int e = 0; e < pl.elim.length; e++) {
             int k = pl.elim[e];
             double rk = rhs[k] / pivot[k];
             if (rk != 0) {
                 for (int c = pl.colStart[e]; c < pl.colStart[e + 1]; c++) {
-                    b[pl.colRow[c]] -= colVal[c] * rk;
+                    y[colRowPlace[c]] -= colVal[c] * rk;
                 }
-            }
-        }
-        double[] y = pl.y;
-        for (int i = 0; i < n; i++) {
-            if (pl.place[i] >= 0) {
-                y[pl.place[i]] = b[i];
             }
         }
         pl.lu.solve(y, y);
         double[] out = new double[n];
-        for (int i = 0; i < n; i++) {
-            if (pl.place[i] >= 0) {
-                out[i] = y[pl.place[i]];
-            }
+        boolean finite = true;
+        for (int j = 0; j < m; j++) {
+            double v = y[j];
+            finite &= Double.isFinite(v);
+            out[keptIndex[j]] = v;
         }
         for (int e = 0; e < pl.elim.length; e++) {
             int k = pl.elim[e];
@@ -354,9 +354,11 @@ final class LinearStep implements Jacobian.Kept {
             for (int r = pl.rowStart[e]; r < pl.rowStart[e + 1]; r++) {
                 sum -= rowVal[r] * out[pl.rowCol[r]];
             }
-            out[k] = sum / pivot[k];
+            double v = sum / pivot[k];
+            finite &= Double.isFinite(v);
+            out[k] = v;
         }
-        return finite(out) ? out : null;
+        return finite ? out : null;
     }
 
     /** The current sparsity pattern's condensation, numbering, work arrays and factorisation. */
@@ -374,6 +376,10 @@ final class LinearStep implements Jacobian.Kept {
         int m;
         /** Position of each kept unknown in the factorised matrix (after renumbering); −1 if eliminated. */
         int[] place;
+        /** The unknown at each position of the factorised matrix (place inverted). */
+        int[] keptIndex;
+        /** Position of the kept row of each column slot of an eliminated unknown. */
+        int[] colRowPlace;
         /** Entry indices grouped by role (kept, pivot, row, column), the group ends and each entry's dest. */
         int[] byRole;
         int[] byRoleDest;
@@ -472,7 +478,6 @@ final class LinearStep implements Jacobian.Kept {
         double[] pivot;
         double[] rowVal;
         double[] colVal;
-        double[] b;
         double[] y;
         SparseLu lu;
         /** Pattern of L found by the minimum degree elimination (see Ordering.Elimination); null for RCM. */
@@ -650,8 +655,16 @@ final class LinearStep implements Jacobian.Kept {
                 }
             }
             p.place = new int[n];
+            p.keptIndex = new int[m];
             for (int i = 0; i < n; i++) {
                 p.place[i] = kept[i] < 0 ? -1 : inverse[kept[i]];
+                if (p.place[i] >= 0) {
+                    p.keptIndex[p.place[i]] = i;
+                }
+            }
+            p.colRowPlace = new int[p.colSlots];
+            for (int c = 0; c < p.colSlots; c++) {
+                p.colRowPlace[c] = p.place[p.colRow[c]];
             }
             // the renumbered pattern as compressed columns with rows sorted: column c is kept column
             // perm[c], its short list sorted by insertion; finalOf[u] is where unique entry u ends up
@@ -707,7 +720,6 @@ final class LinearStep implements Jacobian.Kept {
             p.pivot = new double[n];
             p.rowVal = new double[p.rowSlots];
             p.colVal = new double[p.colSlots];
-            p.b = new double[n];
             p.y = new double[m];
             return p;
         }
