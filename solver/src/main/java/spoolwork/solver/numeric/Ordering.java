@@ -121,31 +121,38 @@ final class Ordering {
                 len[c]++;
             }
         }
-        int[][] adj = new int[n][];
+        // every list in one array: node i's neighbours are adj[at[i] .. at[i] + len[i]), with room for
+        // cap[i]; a list that outgrows its room moves to the end of the array
+        int[] at = new int[n];
+        int[] cap = new int[n];
+        int used = 0;
         for (int i = 0; i < n; i++) {
-            adj[i] = new int[Math.max(4, len[i])];
+            at[i] = used;
+            cap[i] = len[i] + SLACK;
+            used += cap[i];
             len[i] = 0;
         }
+        int[] adj = new int[used + used / 4 + 16];
         int[] mark = new int[n];
         int stamp = 0;
         for (int k = 0; k < count; k++) {
             int r = rows[k];
             int c = cols[k];
             if (r != c) {
-                adj[r][len[r]++] = c;
-                adj[c][len[c]++] = r;
+                adj[at[r] + len[r]++] = c;
+                adj[at[c] + len[c]++] = r;
             }
         }
         // drop repeated neighbours
         for (int i = 0; i < n; i++) {
             stamp++;
-            int[] a = adj[i];
+            int a = at[i];
             int m = 0;
             for (int t = 0; t < len[i]; t++) {
-                int j = a[t];
+                int j = adj[a + t];
                 if (mark[j] != stamp) {
                     mark[j] = stamp;
-                    a[m++] = j;
+                    adj[a + m++] = j;
                 }
             }
             len[i] = m;
@@ -189,32 +196,32 @@ final class Ordering {
             int v = head[minDegree];
             remove(head, nextInBucket, prevInBucket, v, degree[v]);
             perm[k] = v;
-            int[] nv = adj[v];
+            int nv = at[v];
             int lv = len[v];
             if (pattern != null) {
                 if (patternSize + lv > patternRows.length) {
                     patternRows = Arrays.copyOf(patternRows, Math.max(2 * patternRows.length, patternSize + lv));
                 }
                 patternStart[k] = patternSize;
-                System.arraycopy(nv, 0, patternRows, patternSize, lv);
+                System.arraycopy(adj, nv, patternRows, patternSize, lv);
                 patternSize += lv;
             }
             // v's neighbours carry vStamp, so that a neighbour already joined to all the others (usual after
             // condensation) only loses v, without a second pass
             int vStamp = ++stamp;
             for (int t = 0; t < lv; t++) {
-                mark[nv[t]] = vStamp;
+                mark[adj[nv + t]] = vStamp;
             }
             for (int t = 0; t < lv; t++) {
-                int u = nv[t];
+                int u = adj[nv + t];
                 // u's new neighbours: its old ones without v, and v's other neighbours
-                int[] au = adj[u];
+                int au = at[u];
                 int lu = 0;
                 int common = 0;
                 for (int s = 0; s < len[u]; s++) {
-                    int w = au[s];
+                    int w = adj[au + s];
                     if (w != v) {
-                        au[lu++] = w;
+                        adj[au + lu++] = w;
                         if (mark[w] == vStamp) {
                             common++;
                         }
@@ -223,21 +230,29 @@ final class Ordering {
                 if (common < lv - 1) {
                     stamp++;
                     for (int s = 0; s < lu; s++) {
-                        mark[au[s]] = stamp;
+                        mark[adj[au + s]] = stamp;
                     }
                     mark[u] = stamp;
                     for (int s = 0; s < lv; s++) {
-                        int w = nv[s];
+                        int w = adj[nv + s];
                         if (mark[w] != stamp) {
-                            if (lu == au.length) {
-                                au = Arrays.copyOf(au, 2 * au.length);
-                                adj[u] = au;
+                            if (lu == cap[u]) {
+                                // move u's list to the end, with twice the room
+                                int room = 2 * cap[u];
+                                if (used + room > adj.length) {
+                                    adj = Arrays.copyOf(adj, Math.max(2 * adj.length, used + room));
+                                }
+                                System.arraycopy(adj, au, adj, used, lu);
+                                au = used;
+                                at[u] = au;
+                                cap[u] = room;
+                                used += room;
                             }
-                            au[lu++] = w;
+                            adj[au + lu++] = w;
                         }
                     }
                     for (int s = 0; s < lv; s++) {
-                        mark[nv[s]] = vStamp;
+                        mark[adj[nv + s]] = vStamp;
                     }
                 }
                 len[u] = lu;
@@ -253,7 +268,7 @@ final class Ordering {
                     minDegree = Math.min(minDegree, lu);
                 }
             }
-            adj[v] = null;
+            len[v] = 0;
         }
         if (pattern != null) {
             patternStart[n] = patternSize;
@@ -262,6 +277,9 @@ final class Ordering {
         }
         return perm;
     }
+
+    /** Room for fill-in each node's list has beyond its first neighbours. */
+    private static final int SLACK = 4;
 
     private static void insert(int[] head, int[] next, int[] prev, int node, int d) {
         next[node] = head[d];
