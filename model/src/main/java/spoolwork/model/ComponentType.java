@@ -248,27 +248,74 @@ public enum ComponentType {
         if (!isDirectionalValve()) {
             return List.of();
         }
+        String key = spoolOption();
+        String choice = key == null ? null : option(chosen, key);
+        List<SpoolPosition> known = SpoolTable.BY_CHOICE.get(this).get(choice);
+        return known != null ? known : spoolPositions(choice);
+    }
+
+    /** The one option a directional valve's spool positions depend on; null when they depend on none. */
+    private String spoolOption() {
+        switch (this) {
+            case DIRECTIONAL_2_2:
+            case DIRECTIONAL_3_2:
+                return "normal";
+            case DIRECTIONAL_4_3:
+                return "centre";
+            default:
+                return null;
+        }
+    }
+
+    /** The spool positions of a directional valve given the choice of its {@link #spoolOption}. */
+    private List<SpoolPosition> spoolPositions(String choice) {
         switch (this) {
             case DIRECTIONAL_2_2: {
                 SpoolPosition open = new SpoolPosition("a", List.of(new FlowPath("P", "A")), Set.of());
                 SpoolPosition shut = new SpoolPosition("a", List.of(), Set.of("P", "A"));
-                return "open".equals(option(chosen, "normal"))
+                return "open".equals(choice)
                         ? List.of(rename(shut, "a"), rename(open, SpoolPosition.REST))
                         : List.of(open, rename(shut, SpoolPosition.REST));
             }
             case DIRECTIONAL_3_2: {
                 SpoolPosition supply = new SpoolPosition("a", List.of(new FlowPath("P", "A")), Set.of("T"));
                 SpoolPosition vent = new SpoolPosition("a", List.of(new FlowPath("A", "T")), Set.of("P"));
-                return "open".equals(option(chosen, "normal"))
+                return "open".equals(choice)
                         ? List.of(vent, rename(supply, SpoolPosition.REST))
                         : List.of(supply, rename(vent, SpoolPosition.REST));
             }
             case DIRECTIONAL_4_2:
                 return List.of(parallel("a"), crossed(SpoolPosition.REST));
             case DIRECTIONAL_4_3:
-                return List.of(parallel("a"), centre(option(chosen, "centre")), crossed("b"));
+                return List.of(parallel("a"), centre(choice), crossed("b"));
             default:
                 throw new IllegalStateException(name());
+        }
+    }
+
+    /**
+     * The spool positions of every directional valve type for every declared choice of its option, built
+     * once: they are constants of the catalogue, and the netlist and the solver ask for them once per valve
+     * per solve. A choice the type does not declare is not in the table and is built (or refused) as asked.
+     */
+    private static final class SpoolTable {
+        static final Map<ComponentType, Map<String, List<SpoolPosition>>> BY_CHOICE =
+                new java.util.EnumMap<>(ComponentType.class);
+
+        static {
+            for (ComponentType t : values()) {
+                if (!t.isDirectionalValve()) {
+                    continue;
+                }
+                // a HashMap, as a type whose positions depend on no option keys them by null
+                Map<String, List<SpoolPosition>> byChoice = new java.util.HashMap<>();
+                String key = t.spoolOption();
+                for (String choice : key == null ? Collections.<String>singletonList(null)
+                        : t.options.get(key).choices()) {
+                    byChoice.put(choice, t.spoolPositions(choice));
+                }
+                BY_CHOICE.put(t, byChoice);
+            }
         }
     }
 

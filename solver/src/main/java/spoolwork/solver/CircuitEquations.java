@@ -4,7 +4,6 @@ import java.util.AbstractMap;
 import java.util.ArrayList;
 import java.util.Collections;
 import java.util.LinkedHashMap;
-import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
@@ -422,12 +421,28 @@ final class CircuitEquations {
         }
     }
 
-    private final Map<List<Object>, SpoolPosition> positions = new HashMap<>();
-
     /** Port pairs of a directional valve that leak across the spool when no open path joins them. */
-    private static final String[] LEAK_PAIRS = {"PA", "PB", "AT", "BT"};
     private static final String[] LEAK_FROM = {"P", "P", "A", "B"};
     private static final String[] LEAK_TO = {"A", "B", "T", "T"};
+
+    /**
+     * By component type: the indices into {@link #LEAK_FROM} of the pairs whose two ports the type has, so
+     * that building a valve does not scan its ports for every pair.
+     */
+    private static final int[][] LEAKS_OF = new int[ComponentType.values().length][];
+
+    static {
+        for (ComponentType t : ComponentType.values()) {
+            int[] ks = new int[LEAK_FROM.length];
+            int n = 0;
+            for (int k = 0; k < LEAK_FROM.length; k++) {
+                if (hasPort(t, LEAK_FROM[k]) && hasPort(t, LEAK_TO[k])) {
+                    ks[n++] = k;
+                }
+            }
+            LEAKS_OF[t.ordinal()] = java.util.Arrays.copyOf(ks, n);
+        }
+    }
 
     private static boolean hasPort(ComponentType t, String name) {
         for (PortSpec p : t.ports()) {
@@ -438,38 +453,42 @@ final class CircuitEquations {
         return false;
     }
 
+    /** True when an open path of the position joins the two ports, in either direction. */
+    private static boolean joins(SpoolPosition pos, String x, String y) {
+        for (SpoolPosition.FlowPath fp : pos.paths()) {
+            if (fp.from().equals(x) && fp.to().equals(y) || fp.from().equals(y) && fp.to().equals(x)) {
+                return true;
+            }
+        }
+        return false;
+    }
+
     private void directional(Component c, List<Element> es) {
         String want = state.positionOf(c.id());
-        // a position depends on the valve's type, options and name only; circuits repeat valves a lot
-        SpoolPosition pos = positions.computeIfAbsent(java.util.Arrays.asList(c.type(), c.options(), want), key -> {
-            SpoolPosition found = null;
-            for (SpoolPosition sp : c.type().spoolPositions(c.options())) {
-                if (sp.name().equals(want)) {
-                    found = sp;
-                }
+        // the catalogue keeps each type's positions per option choice, so this walks two or three of them
+        SpoolPosition pos = null;
+        for (SpoolPosition sp : c.type().spoolPositions(c.options())) {
+            if (sp.name().equals(want)) {
+                pos = sp;
             }
-            return found;
-        });
+        }
         if (pos == null) {
             throw new IllegalStateException(c.tag() + " has no spool position " + want);
         }
-        double rated = c.param("rated_flow");
-        double drop = c.param("rated_drop");
-        List<String> joined = new ArrayList<>();
+        // every open path of the valve has the same law, and a law holds no state, so they share one
+        DropLaw law = DropLaw.rated(c.param("rated_flow"), c.param("rated_drop"));
         for (SpoolPosition.FlowPath fp : pos.paths()) {
-            es.add(new Branch(c.tag(), node(c, fp.from()), fp.from(), node(c, fp.to()), fp.to(),
-                    DropLaw.rated(rated, drop), PowerKind.VALVE, net));
-            joined.add(fp.from() + fp.to());
-            joined.add(fp.to() + fp.from());
+            es.add(new Branch(c.tag(), node(c, fp.from()), fp.from(), node(c, fp.to()), fp.to(), law,
+                    PowerKind.VALVE, net));
         }
         double leak = c.param("leakage");
         if (leak <= 0) {
             return;
         }
-        for (int k = 0; k < LEAK_FROM.length; k++) {
+        for (int k : LEAKS_OF[c.type().ordinal()]) {
             String x = LEAK_FROM[k];
             String y = LEAK_TO[k];
-            if (!hasPort(c.type(), x) || !hasPort(c.type(), y) || joined.contains(LEAK_PAIRS[k])) {
+            if (joins(pos, x, y)) {
                 continue;
             }
             es.add(new Conductance(c.tag(), node(c, x), x, node(c, y), y, leak));

@@ -205,6 +205,8 @@ public final class SteadyStateSolver {
         double pumpInput = 0;
         double pumpHydraulic = 0;
         Map<String, Double> inputByPump = new HashMap<>();
+        // cavitation warnings, in drawing order; they follow the prime movers' warnings
+        List<Diagnostic> cavitation = new ArrayList<>();
         for (Component c : circuit.components()) {
             Report rep = new Report();
             for (Element e : eq.componentElements.get(ci++)) {
@@ -229,6 +231,13 @@ public final class SteadyStateSolver {
                 pumpInput += values.get("input_power_w");
                 pumpHydraulic += values.get("hydraulic_power_w");
                 inputByPump.put(c.id(), values.get("input_power_w"));
+                // only a pump reports its inlet's absolute pressure
+                Double abs = values.get("inlet_pressure_abs_pa");
+                if (abs != null && abs < 0.8e5) {
+                    cavitation.add(new Diagnostic(Severity.WARNING, String.format(java.util.Locale.ROOT,
+                            "pump %s inlet is at %.2f bar absolute, below about 0.8 bar (common practice): risk of cavitation",
+                            c.tag(), abs / 1e5), List.of(c.tag())));
+                }
             }
             comps.put(c.tag(), new ComponentResult(c.id(), c.tag(), c.type(), Frozen.own(ports), Frozen.own(values)));
         }
@@ -267,14 +276,7 @@ public final class SteadyStateSolver {
                 power[PowerKind.RELIEF.ordinal()], power[PowerKind.THROTTLE.ordinal()],
                 power[PowerKind.LINE.ordinal()], power[PowerKind.LEAKAGE.ordinal()], power[PowerKind.VALVE.ordinal()],
                 power[PowerKind.ACTUATOR.ordinal()], pumpLoss);
-        for (Map.Entry<String, ComponentResult> e : comps.entrySet()) {
-            Double abs = e.getValue().values().get("inlet_pressure_abs_pa");
-            if (abs != null && abs < 0.8e5) {
-                diagnostics.add(new Diagnostic(Severity.WARNING, String.format(java.util.Locale.ROOT,
-                        "pump %s inlet is at %.2f bar absolute, below about 0.8 bar (common practice): risk of cavitation",
-                        e.getKey(), abs / 1e5), List.of(e.getKey())));
-            }
-        }
+        diagnostics.addAll(cavitation);
         return new Solution(state.name(), true, iterations, diagnostics, Frozen.own(comps), Frozen.own(lines),
                 balance);
     }

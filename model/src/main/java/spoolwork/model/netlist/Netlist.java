@@ -142,8 +142,6 @@ public final class Netlist {
             es[m++] = e;
         }
         this.lineEdgeCount = m;
-        // the paths of a directional valve depend on its type, options and spool position only
-        Map<List<Object>, List<List<String>>> valvePaths = new HashMap<>();
         // the components' port nodes are numbered in drawing order, so each one's first node is counted here
         int first = 0;
         for (Component c : circuit.components()) {
@@ -153,11 +151,9 @@ public final class Netlist {
                     first++;
                 }
             }
-            String position = state == null ? null : state.positionOf(c.id());
-            List<List<String>> paths = c.type().isDirectionalValve()
-                    ? valvePaths.computeIfAbsent(Arrays.asList(c.type(), c.options(), position),
-                            key -> c.type().internalPaths(c.options(), position))
-                    : c.type().internalPaths(c.options(), position);
+            // only a directional valve's paths depend on the state, so only a valve looks up its position
+            String position = state == null || !c.type().isDirectionalValve() ? null : state.positionOf(c.id());
+            List<List<String>> paths = c.type().internalPaths(c.options(), position);
             for (List<String> path : paths) {
                 int a = existingPort(firstOfC, c, path.get(0));
                 int b = existingPort(firstOfC, c, path.get(1));

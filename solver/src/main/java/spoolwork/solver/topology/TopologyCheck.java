@@ -2,6 +2,7 @@ package spoolwork.solver.topology;
 
 import java.util.ArrayList;
 import java.util.Arrays;
+import java.util.EnumSet;
 import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Map;
@@ -72,6 +73,23 @@ public final class TopologyCheck {
             adjKind[fill[from[e]]++] = kind[e];
             adjNode[fill[to[e]]] = from[e];
             adjKind[fill[to[e]]++] = kind[e];
+        }
+    }
+
+    /**
+     * Number of hydraulic ports of each component type. The netlist numbers the ports of the components
+     * consecutively in drawing order, so a walk over the components counts its way to each one's ports
+     * instead of looking every component up by id.
+     */
+    private static final int[] HYDRAULIC_PORTS = new int[ComponentType.values().length];
+
+    static {
+        for (ComponentType t : ComponentType.values()) {
+            for (PortSpec p : t.ports()) {
+                if (!p.mechanical()) {
+                    HYDRAULIC_PORTS[t.ordinal()]++;
+                }
+            }
         }
     }
 
@@ -237,20 +255,23 @@ public final class TopologyCheck {
 
     private void pumps(List<Diagnostic> out) {
         int[] label = parts(false);
-        boolean[] relieved = partsWith(label, Set.of(ComponentType.RELIEF_VALVE), "P");
-        boolean[] fed = partsWith(label, Set.of(ComponentType.RESERVOIR), null);
+        boolean[] relieved = partsWith(label, EnumSet.of(ComponentType.RELIEF_VALVE), "P");
+        boolean[] fed = partsWith(label, EnumSet.of(ComponentType.RESERVOIR), null);
+        int first = 0;
         for (Component c : circuit.components()) {
+            int firstOfC = first;
+            first += HYDRAULIC_PORTS[c.type().ordinal()];
             if (!c.type().isPump()) {
                 continue;
             }
-            int outlet = label[netlist.portIndex(c.id(), "P")];
+            int outlet = label[Netlist.portAt(firstOfC, c, "P")];
             if (c.type() == ComponentType.FIXED_PUMP && !relieved[outlet]) {
                 out.add(new Diagnostic(Severity.ERROR, "the outlet of fixed pump " + c.tag()
                         + " reaches no relief valve in state " + state.name()
                         + ": its pressure would rise until something breaks. Add a relief valve at the pump.",
                         List.of(c.tag())));
             }
-            if (!fed[label[netlist.portIndex(c.id(), "S")]]) {
+            if (!fed[label[Netlist.portAt(firstOfC, c, "S")]]) {
                 out.add(new Diagnostic(Severity.ERROR, "the inlet S of pump " + c.tag()
                         + " is not fed from a reservoir: it would run dry", List.of(c.tag())));
             }
@@ -263,9 +284,12 @@ public final class TopologyCheck {
     private void locked(List<Diagnostic> out) {
         trappedNode = new boolean[nodes.length];
         int[] label = parts(true);
-        boolean[] escape = partsWith(label, Set.of(ComponentType.RESERVOIR, ComponentType.FIXED_PUMP,
+        boolean[] escape = partsWith(label, EnumSet.of(ComponentType.RESERVOIR, ComponentType.FIXED_PUMP,
                 ComponentType.COMPENSATED_PUMP, ComponentType.ACCUMULATOR), null);
+        int first = 0;
         for (Component c : circuit.components()) {
+            int firstOfC = first;
+            first += HYDRAULIC_PORTS[c.type().ordinal()];
             if (!c.type().isActuator()) {
                 continue;
             }
@@ -274,12 +298,16 @@ public final class TopologyCheck {
                 continue;
             }
             List<String> trapped = new ArrayList<>();
+            int node = firstOfC;
             for (PortSpec ps : c.type().ports()) {
-                int node = ps.mechanical() ? -1 : netlist.portIndex(c.id(), ps.name());
-                if (node >= 0 && !escape[label[node]]) {
+                if (ps.mechanical()) {
+                    continue;
+                }
+                if (!escape[label[node]]) {
                     trapped.add(ps.name());
                     trappedNode[node] = true;
                 }
+                node++;
             }
             if (!trapped.isEmpty()) {
                 out.add(new Diagnostic(Severity.WARNING, "caution: " + c.tag() + " is hydraulically locked in state "
