@@ -195,7 +195,9 @@ public final class SteadyStateSolver {
         for (Element b : eq.lineBranches.values()) {
             b.report(x, net, nodeReport);
         }
-        nodeReport.power.forEach((k, v) -> power[k.ordinal()] += v);
+        for (int k = 0; k < power.length; k++) {
+            power[k] += nodeReport.power[k];
+        }
         LinkedHashMap<String, ComponentResult> comps = new LinkedHashMap<>(capacity(circuit.components().size()));
         // flow into its component at every port, by netlist node number: component ports come first, in
         // drawing order and port order
@@ -212,7 +214,9 @@ public final class SteadyStateSolver {
             for (Element e : eq.componentElements.get(ci++)) {
                 e.report(x, net, rep);
             }
-            rep.power.forEach((k, v) -> power[k.ordinal()] += v);
+            for (int k = 0; k < power.length; k++) {
+                power[k] += rep.power[k];
+            }
             LinkedHashMap<String, PortResult> ports = new LinkedHashMap<>();
             for (PortSpec ps : c.type().ports()) {
                 if (ps.mechanical()) {
@@ -303,20 +307,12 @@ public final class SteadyStateSolver {
             case PRESSURE_GAUGE -> values.put("pressure_pa", ports.get("P").pressure());
             case ORIFICE, THROTTLE, FILTER, COOLER, CHECK_VALVE, PILOT_CHECK_VALVE, SEQUENCE_VALVE, REDUCING_VALVE,
                     COUNTERBALANCE_VALVE, FLOW_METER -> {
-                double w = 0;
-                for (double v : rep.power.values()) {
-                    w += v;
-                }
-                values.putIfAbsent("power_loss_w", w);
+                values.putIfAbsent("power_loss_w", rep.totalPower());
                 String in = c.type().ports().get(0).name();
                 values.putIfAbsent("flow_m3s", ports.get(in).flow());
             }
             case DIRECTIONAL_2_2, DIRECTIONAL_3_2, DIRECTIONAL_4_2, DIRECTIONAL_4_3 -> {
-                double w = 0;
-                for (double v : rep.power.values()) {
-                    w += v;
-                }
-                values.put("power_loss_w", w);
+                values.put("power_loss_w", rep.totalPower());
             }
             default -> {
             }

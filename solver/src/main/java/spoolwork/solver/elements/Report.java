@@ -1,6 +1,5 @@
 package spoolwork.solver.elements;
 
-import java.util.EnumMap;
 import java.util.LinkedHashMap;
 import java.util.Map;
 
@@ -10,8 +9,8 @@ public final class Report {
     public final Map<String, Double> portFlows = new LinkedHashMap<>();
     /** Named results in SI, e.g. "velocity_mps". */
     public final Map<String, Double> values = new LinkedHashMap<>();
-    /** Absorbed power by kind, W. */
-    public final EnumMap<PowerKind, Double> power = new EnumMap<>(PowerKind.class);
+    /** Absorbed power by kind (index: the kind's ordinal), W; 0 for a kind never reported. */
+    public final double[] power = new double[PowerKind.values().length];
 
     public void flow(String port, double q) {
         Double old = portFlows.get(port);
@@ -24,7 +23,15 @@ public final class Report {
     }
 
     public void power(PowerKind kind, double w) {
-        Double old = power.get(kind);
-        power.put(kind, old == null ? w : old + w);
+        power[kind.ordinal()] += w;
+    }
+
+    /** Power absorbed of every kind together, W (summed in the kinds' order). */
+    public double totalPower() {
+        double w = 0;
+        for (double v : power) {
+            w += v;
+        }
+        return w;
     }
 }
