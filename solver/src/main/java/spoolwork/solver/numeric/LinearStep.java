@@ -38,6 +38,7 @@ final class LinearStep implements Jacobian.Kept {
         this.trial = new Triplets(Math.max(256, 4 * n));
         this.dense = method == LinearMethod.DENSE || (method == LinearMethod.AUTO && n <= LinearMethod.DENSE_LIMIT);
         this.eliminable = new boolean[n];
+        this.outputs = dense ? null : new double[2][n];
         this.delayed = new boolean[n];
         if (s != null && !dense) {
             for (int i = 0; i < n; i++) {
@@ -170,7 +171,8 @@ final class LinearStep implements Jacobian.Kept {
 
     /**
      * Solves (R⁻¹·J·C)·y = rhs for y, R = diag(rowScale), C = diag(colScale); returns null when the matrix
-     * is singular or the answer is not finite.
+     * is singular or the answer is not finite. On the sparse path the returned array is one of two that
+     * this object takes in turn: it stays valid until the second solve after this one.
      */
     double[] solve(double[] rhs, double[] rowScale, double[] colScale) {
         reusable = false;
@@ -341,7 +343,9 @@ final class LinearStep implements Jacobian.Kept {
             }
         }
         pl.lu.solve(y, y);
-        double[] out = new double[n];
+        // two output arrays in turn, so that the step of the round before stays valid (Newton keeps it)
+        double[] out = outputs[nextOutput];
+        nextOutput = 1 - nextOutput;
         boolean finite = true;
         for (int j = 0; j < m; j++) {
             double v = y[j];
@@ -360,6 +364,9 @@ final class LinearStep implements Jacobian.Kept {
         }
         return finite ? out : null;
     }
+
+    private final double[][] outputs;
+    private int nextOutput;
 
     /** The current sparsity pattern's condensation, numbering, work arrays and factorisation. */
     private Plan plan;
