@@ -29,7 +29,7 @@ import spoolwork.solver.sample.CircuitGenerator;
  * generated circuits per size are printed at set-up. Run with {@code mvn -B -Pbench -pl solver -am clean verify}.
  */
 @State(Scope.Benchmark)
-@Fork(value = 1, jvmArgs = {"-Xmx2g"})
+@Fork(value = 1, jvmArgs = {"-Xms2g", "-Xmx2g"})
 @Warmup(iterations = 5, time = 2)
 @Measurement(iterations = 5, time = 3)
 @BenchmarkMode(Mode.SampleTime)
