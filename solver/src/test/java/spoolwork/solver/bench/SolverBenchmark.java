@@ -30,7 +30,7 @@ import spoolwork.solver.sample.CircuitGenerator;
  */
 @State(Scope.Benchmark)
 @Fork(value = 1, jvmArgs = {"-Xms2g", "-Xmx2g"})
-@Warmup(iterations = 5, time = 2)
+@Warmup(iterations = 10, time = 2)
 @Measurement(iterations = 5, time = 3)
 @BenchmarkMode(Mode.SampleTime)
 @OutputTimeUnit(TimeUnit.MILLISECONDS)
