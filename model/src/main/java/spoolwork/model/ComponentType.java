@@ -160,6 +160,7 @@ public enum ComponentType {
     private final String tagPrefix;
     private final Category category;
     private final List<PortSpec> ports;
+    private final int hydraulicPorts;
     private final Map<String, ParameterSpec> params;
     private final Map<String, OptionSpec> options;
 
@@ -171,6 +172,7 @@ public enum ComponentType {
         this.tagPrefix = tagPrefix;
         this.category = category;
         this.ports = List.copyOf(b.ports);
+        this.hydraulicPorts = (int) ports.stream().filter(p -> !p.mechanical()).count();
         this.params = Collections.unmodifiableMap(b.params);
         this.options = Collections.unmodifiableMap(b.options);
     }
@@ -197,6 +199,14 @@ public enum ComponentType {
     /** Declared ports in drawing order. */
     public List<PortSpec> ports() {
         return ports;
+    }
+
+    /**
+     * Number of hydraulic (non-mechanical) ports: the netlist gives a component this many consecutive node
+     * numbers, in port order.
+     */
+    public int hydraulicPortCount() {
+        return hydraulicPorts;
     }
 
     public Optional<PortSpec> port(String name) {

@@ -127,11 +127,7 @@ final class CircuitEquations {
             building = c;
             buildingBase = base;
             build(c, es);
-            for (PortSpec p : c.type().ports()) {
-                if (!p.mechanical()) {
-                    base++;
-                }
-            }
+            base += c.type().hydraulicPortCount();
             es.forEach(net::addElement);
             elementsOf.put(c.id(), es);
             componentElements.add(es);

@@ -73,13 +73,10 @@ public final class Netlist {
         int count = 0;
         int reservoirCount = 0;
         for (Component c : circuit.components()) {
-            for (PortSpec p : c.type().ports()) {
-                if (!p.mechanical()) {
-                    count++;
-                    if (c.type() == ComponentType.RESERVOIR) {
-                        reservoirCount++;
-                    }
-                }
+            int ports = c.type().hydraulicPortCount();
+            count += ports;
+            if (c.type() == ComponentType.RESERVOIR) {
+                reservoirCount += ports;
             }
         }
         int portCount = count;
@@ -146,11 +143,7 @@ public final class Netlist {
         int first = 0;
         for (Component c : circuit.components()) {
             int firstOfC = first;
-            for (PortSpec p : c.type().ports()) {
-                if (!p.mechanical()) {
-                    first++;
-                }
-            }
+            first += c.type().hydraulicPortCount();
             // only a directional valve's paths depend on the state, so only a valve looks up its position
             String position = state == null || !c.type().isDirectionalValve() ? null : state.positionOf(c.id());
             List<List<String>> paths = c.type().internalPaths(c.options(), position);

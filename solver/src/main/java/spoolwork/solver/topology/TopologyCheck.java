@@ -76,23 +76,6 @@ public final class TopologyCheck {
         }
     }
 
-    /**
-     * Number of hydraulic ports of each component type. The netlist numbers the ports of the components
-     * consecutively in drawing order, so a walk over the components counts its way to each one's ports
-     * instead of looking every component up by id.
-     */
-    private static final int[] HYDRAULIC_PORTS = new int[ComponentType.values().length];
-
-    static {
-        for (ComponentType t : ComponentType.values()) {
-            for (PortSpec p : t.ports()) {
-                if (!p.mechanical()) {
-                    HYDRAULIC_PORTS[t.ordinal()]++;
-                }
-            }
-        }
-    }
-
     private static final byte OTHER = 0;
     private static final byte PUMP_PATH = 1;
     private static final byte MOTOR_PATH = 2;
@@ -257,10 +240,12 @@ public final class TopologyCheck {
         int[] label = parts(false);
         boolean[] relieved = partsWith(label, EnumSet.of(ComponentType.RELIEF_VALVE), "P");
         boolean[] fed = partsWith(label, EnumSet.of(ComponentType.RESERVOIR), null);
+        // the netlist numbers the components' hydraulic ports consecutively in drawing order, so the walk
+        // counts its way to each one's ports instead of looking every component up by id
         int first = 0;
         for (Component c : circuit.components()) {
             int firstOfC = first;
-            first += HYDRAULIC_PORTS[c.type().ordinal()];
+            first += c.type().hydraulicPortCount();
             if (!c.type().isPump()) {
                 continue;
             }
@@ -289,7 +274,7 @@ public final class TopologyCheck {
         int first = 0;
         for (Component c : circuit.components()) {
             int firstOfC = first;
-            first += HYDRAULIC_PORTS[c.type().ordinal()];
+            first += c.type().hydraulicPortCount();
             if (!c.type().isActuator()) {
                 continue;
             }
