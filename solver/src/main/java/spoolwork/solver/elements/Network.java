@@ -218,19 +218,7 @@ public final class Network implements NonlinearSystem {
     private void pairs() {
         if (side == null) {
             int n = size();
-            int m = 0;
-            for (int i = 0; i < n; i++) {
-                if (kinds[i] == Kind.COMPLEMENTARITY) {
-                    m++;
-                }
-            }
-            pairRows = new int[m];
-            m = 0;
-            for (int i = 0; i < n; i++) {
-                if (kinds[i] == Kind.COMPLEMENTARITY) {
-                    pairRows[m++] = i;
-                }
-            }
+            pairRows = java.util.stream.IntStream.range(0, n).filter(i -> kinds[i] == Kind.COMPLEMENTARITY).toArray();
             side = new byte[n];
             java.util.Arrays.fill(side, (byte) -1);
             pairA = new double[n];

@@ -17,8 +17,9 @@ import org.ejml.dense.row.factory.LinearSolverFactory_DDRM;
  * Collects Jacobian entries of one Newton iteration and solves J·dx = b for the step, in scaled units.
  * The sparse path condenses the system, numbers the kept unknowns once per sparsity pattern (minimum degree
  * by default, whose elimination also gives the patterns of L and U for the first factorisation) and factors
- * with {@link SparseLu}, which reuses its pivot order and patterns from one iteration to the next. The fallback for systems that cannot be condensed uses EJML's sparse LU with
- * {@link FillReducing#NONE} after reverse Cuthill–McKee: EJML's own orderings are not safe with its LU.
+ * with {@link SparseLu}, which reuses its pivot order and patterns from one iteration to the next. The
+ * fallback for systems that cannot be condensed uses EJML's sparse LU with {@link FillReducing#NONE} after
+ * reverse Cuthill–McKee: EJML's own orderings are not safe with its LU.
  */
 final class LinearStep implements Jacobian.Kept {
     private final int n;
@@ -199,14 +200,7 @@ final class LinearStep implements Jacobian.Kept {
         if (!reusable) {
             return null;
         }
-        if (dense) {
-            DMatrixRMaj b = new DMatrixRMaj(n, 1);
-            System.arraycopy(rhs, 0, b.data, 0, n);
-            DMatrixRMaj x = new DMatrixRMaj(n, 1);
-            denseLu.solve(b, x);
-            return finite(x.data) ? x.data : null;
-        }
-        return substitute(plan, rhs);
+        return dense ? denseSubstitute(denseLu, rhs) : substitute(plan, rhs);
     }
 
     private double[] solveDense(double[] rhs, double[] rowScale, double[] colScale) {
@@ -225,6 +219,11 @@ final class LinearStep implements Jacobian.Kept {
             return null;
         }
         denseLu = lu;
+        return denseSubstitute(lu, rhs);
+    }
+
+    /** The answer for rhs from a dense factorisation; null when it is not finite. */
+    private double[] denseSubstitute(LinearSolver<DMatrixRMaj, DMatrixRMaj> lu, double[] rhs) {
         DMatrixRMaj b = new DMatrixRMaj(n, 1);
         System.arraycopy(rhs, 0, b.data, 0, n);
         DMatrixRMaj x = new DMatrixRMaj(n, 1);
@@ -415,7 +414,6 @@ final class LinearStep implements Jacobian.Kept {
                 return false;
             }
             int keptEnd = roleEnd[KEPT];
-            int pivotEnd = roleEnd[PIVOT];
             int rowEnd = roleEnd[ROW];
             for (int r = 0; r < t.rewrites; r++) {
                 int slot = slotOf[t.rewritten[r]];
@@ -630,20 +628,16 @@ final class LinearStep implements Jacobian.Kept {
             // unknowns numbered after a neighbour: complementarity ones, and those whose own row does not hold
             // them (an actuator's velocity appears only in its nodes' flow balances), so that eliminating the
             // neighbour first fills in their diagonal and the first factorisation can pivot on it
+            boolean[] hasDiagonal = new boolean[m];
+            for (int u = 0; u < unique; u++) {
+                if (uRow[u] == uCol[u]) {
+                    hasDiagonal[uRow[u]] = true;
+                }
+            }
             boolean[] keptDelayed = new boolean[m];
             for (int i = 0; i < n; i++) {
                 if (kept[i] >= 0) {
-                    keptDelayed[kept[i]] = true;
-                }
-            }
-            for (int u = 0; u < unique; u++) {
-                if (uRow[u] == uCol[u]) {
-                    keptDelayed[uRow[u]] = false;
-                }
-            }
-            for (int i = 0; i < n; i++) {
-                if (kept[i] >= 0 && delayed[i]) {
-                    keptDelayed[kept[i]] = true;
+                    keptDelayed[kept[i]] = delayed[i] || !hasDiagonal[kept[i]];
                 }
             }
             Ordering.Elimination elimination = band ? null : new Ordering.Elimination();
