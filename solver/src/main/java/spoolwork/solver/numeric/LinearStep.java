@@ -257,7 +257,7 @@ final class LinearStep implements Jacobian.Kept {
         if (pl.condensed == current && pl.condensedGeneration == current.generation && pl.scalesKept
                 && pl.update(current)) {
             current.rewrites = 0;
-            return factorAndSubstitute(pl, rhs);
+            return factorAndSubstitute(pl, rhs, true);
         }
         pl.condensed = null;
         double[] pivot = pl.pivot;
@@ -301,15 +301,19 @@ final class LinearStep implements Jacobian.Kept {
         pl.condensedGeneration = current.generation;
         current.rewrites = 0;
         System.arraycopy(vals, 0, pl.condensedValues, 0, count);
-        return factorAndSubstitute(pl, rhs);
+        return factorAndSubstitute(pl, rhs, false);
     }
 
-    private double[] factorAndSubstitute(Plan pl, double[] rhs) {
+    /**
+     * Factors the plan's condensed matrix and solves for rhs. {@code updated}: the matrix was brought up to
+     * date by {@link Plan#update}, which lists the entries it touched, so the factorisation starts from those.
+     */
+    private double[] factorAndSubstitute(Plan pl, double[] rhs, boolean updated) {
         if (pl.lu == null) {
             pl.lu = pl.lStart == null ? new SparseLu(pl.m, pl.colPtr, pl.rowIdx, null)
                     : new SparseLu(pl.m, pl.colPtr, pl.rowIdx, pl.lStart, pl.lRows);
         }
-        if (!pl.lu.factor(pl.values)) {
+        if (!(updated ? pl.lu.factorChanged(pl.values, pl.touched, pl.touchedCount) : pl.lu.factor(pl.values))) {
             return null;
         }
         double[] out = substitute(pl, rhs);
@@ -422,6 +426,7 @@ final class LinearStep implements Jacobian.Kept {
                 }
             }
             double[] sc = byRoleScale;
+            touchedCount = 0;
             for (int r = 0; r < t.rewrites; r++) {
                 int k = t.rewritten[r];
                 int slot = slotOf[k];
@@ -429,6 +434,7 @@ final class LinearStep implements Jacobian.Kept {
                 double old = condensedValues[k] * sc[slot];
                 condensedValues[k] = t.vals[k];
                 if (slot < keptEnd) {
+                    touch(byRoleDest[slot]);
                     values[byRoleDest[slot]] += v - old;
                     continue;
                 }
@@ -439,10 +445,22 @@ final class LinearStep implements Jacobian.Kept {
                 colVal[c] = v;
                 int f = fillAt[c];
                 for (int q = rowStart[e]; q < rowStart[e + 1]; q++) {
+                    touch(fill[f]);
                     values[fill[f++]] -= change * rowVal[q];
                 }
             }
             return true;
+        }
+
+        /** Entries of the condensed matrix the last {@link #update} wrote to, in touchedCount. */
+        int[] touched = new int[16];
+        int touchedCount;
+
+        private void touch(int entry) {
+            if (touchedCount == touched.length) {
+                touched = Arrays.copyOf(touched, 2 * touchedCount);
+            }
+            touched[touchedCount++] = entry;
         }
 
         /** For each column slot: the eliminated unknown it belongs to, and where its fill entries start. */

@@ -16,7 +16,9 @@ import java.util.Arrays;
  * {@link #REFACTOR_PIVOT_TOLERANCE} of the largest candidate of its column and falls back to pivoting from
  * the first column where it is not; the columns before the failed one are kept, the search starts again at
  * the failed column. Both the refactorisation and that search leave alone the columns whose inputs did not
- * change since the last factorisation (see {@link #refactor} and {@link #pivotingFactor}).
+ * change since the last factorisation (see {@link #refactor} and {@link #pivotingFactor}). When the caller
+ * knows which entries it rewrote, {@link #factorChanged} finds those columns from the list instead of
+ * comparing every entry.
  *
  * <p>The looser test for kept pivots is what lets one pivot order serve both sides of a complementarity
  * row: a node held only by leakage has a diagonal some 1e-8 of the margin row that pivots its column on
@@ -60,6 +62,16 @@ final class SparseLu {
     private final int[] pinv;
     private final int[] prow;
     private boolean factored;
+    /** True when the last call of a factor method succeeded, so that its values are those in {@link #last}. */
+    private boolean lastSucceeded;
+    /**
+     * True while U's pattern is the transpose of L's below the diagonal and the pivots are on the diagonal, as
+     * the pattern constructor sets them up and until a search changes them: then the columns whose factors
+     * depend on column k are exactly the rows of L(:, k), and {@link #factorChanged} can find them forward.
+     */
+    private boolean transposedPattern;
+    /** Column of each stored entry of A (for {@link #factorChanged}); made on first use. */
+    private int[] colOf;
     private int fresh;
     /** Values of the last successful factorisation, to find the columns whose factors can change. */
     private final double[] last;
@@ -224,6 +236,7 @@ final class SparseLu {
         // every column counts as changed, so the first factorisation computes them all
         Arrays.fill(last, Double.NaN);
         factored = true;
+        transposedPattern = true;
     }
 
     int size() {
@@ -250,6 +263,7 @@ final class SparseLu {
      * @return false when the matrix is singular or holds a value that is not finite
      */
     boolean factor(double[] values) {
+        lastSucceeded = false;
         for (int p = 0; p < ap[n]; p++) {
             if (!Double.isFinite(values[p])) {
                 factored = false;
@@ -261,14 +275,77 @@ final class SparseLu {
             from = refactor(values);
             if (from < 0) {
                 System.arraycopy(values, 0, last, 0, ap[n]);
+                lastSucceeded = true;
                 return true;
             }
         }
+        return search(values, from);
+    }
+
+    /** Pivoting factorisation from column {@code from} on, after which the values are the last ones. */
+    private boolean search(double[] values, int from) {
+        transposedPattern = false;
         factored = pivotingFactor(values, from);
         if (factored) {
             System.arraycopy(values, 0, last, 0, ap[n]);
+            lastSucceeded = true;
         }
         return factored;
+    }
+
+    /**
+     * As {@link #factor}, for values that differ from those of the last call only in the stored entries
+     * {@code entries[0 .. count)} (others may be listed too), as when a few rows of the matrix were rewritten.
+     * Instead of comparing every entry with the last values it starts from the columns of those entries and
+     * recomputes them and the columns that depend on them, found forward through the pattern of L. Falls
+     * back to {@link #factor} when the last call failed or a search has changed the pattern since the first
+     * factorisation.
+     */
+    boolean factorChanged(double[] values, int[] entries, int count) {
+        if (!factored || !lastSucceeded || !transposedPattern) {
+            return factor(values);
+        }
+        lastSucceeded = false;
+        if (colOf == null) {
+            colOf = new int[ap[n]];
+            for (int j = 0; j < n; j++) {
+                Arrays.fill(colOf, ap[j], ap[j + 1], j);
+            }
+        }
+        Arrays.fill(changed, false);
+        int first = n;
+        for (int e = 0; e < count; e++) {
+            int p = entries[e];
+            if (!Double.isFinite(values[p])) {
+                factored = false;
+                return false;
+            }
+            if (values[p] != last[p]) {
+                // in this pattern the pivot order is the natural one: column j of A is column j of L and U
+                int k = colOf[p];
+                changed[k] = true;
+                first = Math.min(first, k);
+            }
+        }
+        int[] place = rowPlace();
+        for (int k = first; k < n; k++) {
+            if (!changed[k]) {
+                continue;
+            }
+            if (!column(k, values, place)) {
+                // columns after k are not yet known to be recomputed; the search decides them itself
+                Arrays.fill(changed, k + 1, n, false);
+                return search(values, k);
+            }
+            for (int t = lp[k] + 1; t < lp[k + 1]; t++) {
+                changed[li[t]] = true;
+            }
+        }
+        for (int e = 0; e < count; e++) {
+            last[entries[e]] = values[entries[e]];
+        }
+        lastSucceeded = true;
+        return true;
     }
 
     /**
@@ -514,16 +591,7 @@ final class SparseLu {
      * @return −1 when done, else the first column whose pivot failed the test
      */
     private int refactor(double[] values) {
-        if (rowPlace == null) {
-            rowPlace = new int[ap[n]];
-        }
-        if (!rowPlaceValid) {
-            for (int p = 0; p < ap[n]; p++) {
-                rowPlace[p] = pinv[ai[p]];
-            }
-            rowPlaceValid = true;
-        }
-        int[] place = rowPlace;
+        int[] place = rowPlace();
         // x is all zero between columns: each column clears what it wrote as it reads it back
         for (int k = 0; k < n; k++) {
             int col = q[k];
@@ -544,47 +612,74 @@ final class SparseLu {
                 }
             }
             changed[k] = ch;
-            if (!ch) {
-                continue;
-            }
-            double big = 0;
-            for (int p = ap[col]; p < ap[col + 1]; p++) {
-                double v = values[p];
-                x[place[p]] = v;
-                big = Math.max(big, Math.abs(v));
-            }
-            for (int p = up[k]; p < diag; p++) {
-                int j = ui[p];
-                double xj = x[j];
-                x[j] = 0;
-                ux[p] = xj;
-                big = Math.max(big, Math.abs(xj));
-                if (xj != 0) {
-                    for (int t = lp[j] + 1; t < lp[j + 1]; t++) {
-                        x[li[t]] -= lx[t] * xj;
-                    }
-                }
-            }
-            double pivot = x[k];
-            x[k] = 0;
-            double best = Math.abs(pivot);
-            for (int t = lp[k] + 1; t < lp[k + 1]; t++) {
-                best = Math.max(best, Math.abs(x[li[t]]));
-            }
-            big = Math.max(big, best);
-            if (!(Math.abs(pivot) >= REFACTOR_PIVOT_TOLERANCE * best) || !(best > SINGULAR_TOLERANCE * big)
-                    || !Double.isFinite(big)) {
+            if (ch && !column(k, values, place)) {
                 return k;
-            }
-            ux[diag] = pivot;
-            double inverse = 1 / pivot;
-            for (int t = lp[k] + 1; t < lp[k + 1]; t++) {
-                int i = li[t];
-                lx[t] = x[i] * inverse;
-                x[i] = 0;
             }
         }
         return -1;
+    }
+
+    /** {@link #rowPlace} for the current pivot order. */
+    private int[] rowPlace() {
+        if (rowPlace == null) {
+            rowPlace = new int[ap[n]];
+        }
+        if (!rowPlaceValid) {
+            for (int p = 0; p < ap[n]; p++) {
+                rowPlace[p] = pinv[ai[p]];
+            }
+            rowPlaceValid = true;
+        }
+        return rowPlace;
+    }
+
+    /**
+     * Recomputes column k of L and U along the stored pattern and pivot order. False when its pivot fails the
+     * refactorisation's test; the work vector x is all zero again either way.
+     */
+    private boolean column(int k, double[] values, int[] place) {
+        int col = q[k];
+        int diag = up[k + 1] - 1;
+        double big = 0;
+        for (int p = ap[col]; p < ap[col + 1]; p++) {
+            double v = values[p];
+            x[place[p]] = v;
+            big = Math.max(big, Math.abs(v));
+        }
+        for (int p = up[k]; p < diag; p++) {
+            int j = ui[p];
+            double xj = x[j];
+            x[j] = 0;
+            ux[p] = xj;
+            big = Math.max(big, Math.abs(xj));
+            if (xj != 0) {
+                for (int t = lp[j] + 1; t < lp[j + 1]; t++) {
+                    x[li[t]] -= lx[t] * xj;
+                }
+            }
+        }
+        double pivot = x[k];
+        x[k] = 0;
+        double best = Math.abs(pivot);
+        for (int t = lp[k] + 1; t < lp[k + 1]; t++) {
+            best = Math.max(best, Math.abs(x[li[t]]));
+        }
+        big = Math.max(big, best);
+        if (!(Math.abs(pivot) >= REFACTOR_PIVOT_TOLERANCE * best) || !(best > SINGULAR_TOLERANCE * big)
+                || !Double.isFinite(big)) {
+            for (int t = lp[k] + 1; t < lp[k + 1]; t++) {
+                x[li[t]] = 0;
+            }
+            return false;
+        }
+        ux[diag] = pivot;
+        double inverse = 1 / pivot;
+        for (int t = lp[k] + 1; t < lp[k + 1]; t++) {
+            int i = li[t];
+            lx[t] = x[i] * inverse;
+            x[i] = 0;
+        }
+        return true;
     }
 
     /** Pivot position of the row of each stored entry of A, for the current pivot order. */

@@ -464,47 +464,62 @@ class SparseLuTest {
         assertEquals(1 - 0.5e-12, x[1], 1e-15);
     }
 
+    /**
+     * A circuit-like block of 200 nodes and 20 constraint rows on distinct nodes, each tied both ways to its
+     * node with a zero diagonal (as a valve's margin row on its open side), numbered by minimum degree with
+     * the constraint unknowns after a neighbour as the solver does; with the elimination's pattern of L.
+     */
+    private record Numbered(Sparse b, int n, int nodes, int[] lStart, int[] lRows, int[] inverse) {
+        SparseLu lu() {
+            return new SparseLu(n, b.colPtr(), b.rowIdx(), lStart, lRows);
+        }
+    }
+
+    private static Numbered numberedWithConstraints(long seed) {
+        int nodes = 200;
+        Sparse block = circuitLike(nodes, 0, false, 300 + seed);
+        int n = nodes + 20;
+        Sparse a = new Sparse(n);
+        a.entries.putAll(block.entries.entrySet().stream().collect(java.util.stream.Collectors.toMap(
+                e -> e.getKey() / nodes * n + e.getKey() % nodes, Map.Entry::getValue)));
+        for (int c = 0; c < 20; c++) {
+            int node = 7 * c + 3;
+            a.add(nodes + c, node, 1.5);
+            a.add(node, nodes + c, 1);
+            a.set(nodes + c, nodes + c, 0);
+        }
+        int[] rows = a.rowIdx();
+        int[] cols = new int[rows.length];
+        int[] p = a.colPtr();
+        for (int j = 0; j < n; j++) {
+            Arrays.fill(cols, p[j], p[j + 1], j);
+        }
+        boolean[] delayed = new boolean[n];
+        Arrays.fill(delayed, nodes, n, true);
+        Ordering.Elimination elimination = new Ordering.Elimination();
+        int[] perm = Ordering.minimumDegree(n, rows, cols, rows.length, delayed, elimination);
+        int[] inverse = new int[n];
+        for (int i = 0; i < n; i++) {
+            inverse[perm[i]] = i;
+        }
+        Sparse b = new Sparse(n);
+        for (Map.Entry<Long, Double> e : a.entries.entrySet()) {
+            b.add(inverse[(int) (e.getKey() % n)], inverse[(int) (e.getKey() / n)], e.getValue());
+        }
+        int[] lRows = Arrays.copyOf(elimination.rows, elimination.start[n]);
+        for (int t = 0; t < lRows.length; t++) {
+            lRows[t] = inverse[lRows[t]];
+        }
+        return new Numbered(b, n, nodes, elimination.start, lRows, inverse);
+    }
+
     @Test
     void aPatternFromTheEliminationFactorsWithoutSearching() {
         for (long seed = 0; seed < 5; seed++) {
-            // a circuit-like block and 20 constraint rows on distinct nodes, each tied both ways to its node,
-            // with a zero diagonal (as a valve's margin row on its open side)
-            int nodes = 200;
-            Sparse block = circuitLike(nodes, 0, false, 300 + seed);
-            int n = nodes + 20;
-            Sparse a = new Sparse(n);
-            a.entries.putAll(block.entries.entrySet().stream().collect(java.util.stream.Collectors.toMap(
-                    e -> e.getKey() / nodes * n + e.getKey() % nodes, Map.Entry::getValue)));
-            for (int c = 0; c < 20; c++) {
-                int node = 7 * c + 3;
-                a.add(nodes + c, node, 1.5);
-                a.add(node, nodes + c, 1);
-                a.set(nodes + c, nodes + c, 0);
-            }
-            int[] rows = a.rowIdx();
-            int[] cols = new int[rows.length];
-            int[] p = a.colPtr();
-            for (int j = 0; j < n; j++) {
-                Arrays.fill(cols, p[j], p[j + 1], j);
-            }
-            // the constraint unknowns have a zero diagonal: numbered after a neighbour, as the solver does
-            boolean[] delayed = new boolean[n];
-            Arrays.fill(delayed, nodes, n, true);
-            Ordering.Elimination elimination = new Ordering.Elimination();
-            int[] perm = Ordering.minimumDegree(n, rows, cols, rows.length, delayed, elimination);
-            int[] inverse = new int[n];
-            for (int i = 0; i < n; i++) {
-                inverse[perm[i]] = i;
-            }
-            Sparse b = new Sparse(n);
-            for (Map.Entry<Long, Double> e : a.entries.entrySet()) {
-                b.add(inverse[(int) (e.getKey() % n)], inverse[(int) (e.getKey() / n)], e.getValue());
-            }
-            int[] lRows = Arrays.copyOf(elimination.rows, elimination.start[n]);
-            for (int t = 0; t < lRows.length; t++) {
-                lRows[t] = inverse[lRows[t]];
-            }
-            SparseLu lu = new SparseLu(n, b.colPtr(), b.rowIdx(), elimination.start, lRows);
+            Numbered nb = numberedWithConstraints(seed);
+            Sparse b = nb.b();
+            int n = nb.n();
+            SparseLu lu = nb.lu();
             assertTrue(lu.factor(b.values()), "seed " + seed);
             assertEquals(0, lu.pivotingFactorisations(), "seed " + seed + ": every diagonal pivot passes");
             double[] rhs = randomVector(n, seed);
@@ -527,6 +542,64 @@ class SparseLuTest {
             assertEquals(1, lu.pivotingFactorisations(), "seed " + seed);
             lu.solve(rhs, x);
             assertTrue(backwardError(changed, x, rhs) <= BACKWARD_ERROR, "seed " + seed);
+        }
+    }
+
+    @Test
+    void aRefactorFromTheListedEntriesMatchesOneThatComparesThemAll() {
+        for (long seed = 0; seed < 5; seed++) {
+            Numbered nb = numberedWithConstraints(seed);
+            Sparse b = nb.b();
+            int n = nb.n();
+            SparseLu listed = nb.lu();
+            SparseLu compared = nb.lu();
+            assertTrue(listed.factor(b.values()));
+            assertTrue(compared.factor(b.values()));
+            // three constraint rows change side: the row holds its own unknown instead of its node's pressure
+            SplittableRandom rnd = new SplittableRandom(seed);
+            Sparse changed = new Sparse(n);
+            changed.entries.putAll(b.entries);
+            java.util.List<Long> keys = new java.util.ArrayList<>(b.entries.keySet());
+            java.util.List<Integer> entries = new java.util.ArrayList<>();
+            for (int c = 0; c < 3; c++) {
+                int row = nb.inverse()[nb.nodes() + rnd.nextInt(20)];
+                for (int t = 0; t < keys.size(); t++) {
+                    long key = keys.get(t);
+                    if (key % n == row) {
+                        changed.entries.put(key, key / n == row ? 1.0 : 0.0);
+                        entries.add(t);
+                    }
+                }
+            }
+            int[] list = entries.stream().mapToInt(Integer::intValue).toArray();
+            assertTrue(listed.factorChanged(changed.values(), list, list.length), "seed " + seed);
+            assertTrue(compared.factor(changed.values()), "seed " + seed);
+            double[] rhs = randomVector(n, seed);
+            double[] x = new double[n];
+            double[] y = new double[n];
+            listed.solve(rhs, x);
+            compared.solve(rhs, y);
+            // the same columns recomputed with the same arithmetic: the same numbers to the last bit
+            assertArrayEquals(y, x, 0, "seed " + seed);
+            assertTrue(backwardError(changed, x, rhs) <= BACKWARD_ERROR, "seed " + seed);
+            assertEquals(0, listed.pivotingFactorisations(), "seed " + seed);
+            // an entry listed again after the first column grew a million million times: its diagonal pivot
+            // fails, the search takes over from there and the answer is still right
+            Sparse grown = new Sparse(n);
+            grown.entries.putAll(changed.entries);
+            java.util.List<Integer> below = new java.util.ArrayList<>();
+            for (int t = 0; t < keys.size(); t++) {
+                long key = keys.get(t);
+                if (key / n == 0 && key % n != 0) {
+                    grown.entries.put(key, 1e12 * changed.entries.get(key));
+                    below.add(t);
+                }
+            }
+            int[] grownList = below.stream().mapToInt(Integer::intValue).toArray();
+            assertTrue(listed.factorChanged(grown.values(), grownList, grownList.length), "seed " + seed);
+            assertEquals(1, listed.pivotingFactorisations(), "seed " + seed);
+            listed.solve(rhs, x);
+            assertTrue(backwardError(grown, x, rhs) <= BACKWARD_ERROR, "seed " + seed);
         }
     }
 
