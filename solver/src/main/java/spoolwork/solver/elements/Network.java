@@ -203,30 +203,57 @@ public final class Network implements NonlinearSystem {
 
     // ---- complementarity pairs -------------------------------------------------------------------------
 
-    /** Side of each complementarity row in force for the Newton step: −1 unset, 0 the a side, 1 the b side. */
+    // Complementarity rows are kept by slot (their place among those rows), each with its two sides' values
+    // and, in three flat arrays, the columns and derivatives of both sides: the loops over sides after every
+    // linear solve read them in order instead of through an array per row.
+    /** The row of each slot, in row order. */
+    private int[] pairRows;
+    /** The slot of each row; −1 for the other rows. */
+    private int[] slotOf;
+    /** Side of each slot in force for the Newton step: −1 unset, 0 the a side, 1 the b side. */
     private byte[] side;
+    /** The side each slot's Jacobian entries were last written for. */
+    private byte[] stampedSide;
     private double[] pairA;
     private double[] pairB;
-    /** Columns and derivatives of both sides of each complementarity row, at the last evaluation. */
-    private int[][] pairCols;
-    private double[][] gradA;
-    private double[][] gradB;
-
-    /** The complementarity rows, in order; the loops over sides visit only these. */
-    private int[] pairRows;
+    /** Where each slot's columns start in the flat arrays; −1 before its first Jacobian. */
+    private int[] segStart;
+    private int[] segLength;
+    /** The column list each slot's segment was copied from (elements pass the same array every time). */
+    private int[][] segSource;
+    private int[] flatCols;
+    private double[] flatA;
+    private double[] flatB;
+    private int flatUsed;
+    /** Where each slot's entries start in the Jacobian it was last stamped into; −1 unknown. */
+    private int[] stampedAt;
+    private byte[] previousSide;
 
     private void pairs() {
         if (side == null) {
             int n = size();
             pairRows = java.util.stream.IntStream.range(0, n).filter(i -> kinds[i] == Kind.COMPLEMENTARITY).toArray();
-            side = new byte[n];
-            java.util.Arrays.fill(side, (byte) -1);
-            pairA = new double[n];
-            pairB = new double[n];
-            pairCols = new int[n][];
-            gradA = new double[n][];
-            gradB = new double[n][];
-            stampedAt = new int[n];
+            int slots = pairRows.length;
+            slotOf = new int[n];
+            Arrays.fill(slotOf, -1);
+            for (int s = 0; s < slots; s++) {
+                slotOf[pairRows[s]] = s;
+            }
+            side = new byte[slots];
+            Arrays.fill(side, (byte) -1);
+            stampedSide = new byte[slots];
+            previousSide = new byte[slots];
+            pairA = new double[slots];
+            pairB = new double[slots];
+            segStart = new int[slots];
+            Arrays.fill(segStart, -1);
+            segLength = new int[slots];
+            segSource = new int[slots][];
+            stampedAt = new int[slots];
+            int room = Math.max(16, 4 * slots);
+            flatCols = new int[room];
+            flatA = new double[room];
+            flatB = new double[room];
         }
     }
 
@@ -245,56 +272,68 @@ public final class Network implements NonlinearSystem {
     public void complementarity(int row, double a, double b, int[] cols, double[] da, double[] db, double[] f,
                                 Jacobian j) {
         pairs();
-        if (side[row] < 0) {
-            side[row] = (byte) (a <= b ? 0 : 1);
+        int s = slotOf[row];
+        if (side[s] < 0) {
+            side[s] = (byte) (a <= b ? 0 : 1);
         }
         f[row] = Math.min(a, b);
-        pairA[row] = a;
-        pairB[row] = b;
+        pairA[s] = a;
+        pairB[s] = b;
         if (j == null) {
             return;
         }
-        // an element's column list is fixed for the solve, so it is kept, not copied; the derivatives are copied
+        // an element's column list is fixed for the solve, so it is copied once; the derivatives every time,
         // because elements pass them in scratch arrays
-        pairCols[row] = cols;
-        if (gradA[row] == null || gradA[row].length != cols.length) {
-            gradA[row] = new double[cols.length];
-            gradB[row] = new double[cols.length];
+        int at = segStart[s];
+        if (segSource[s] != cols) {
+            if (at < 0 || segLength[s] != cols.length) {
+                at = flatUsed;
+                flatUsed += cols.length;
+                if (flatUsed > flatCols.length) {
+                    int room = Math.max(2 * flatCols.length, flatUsed);
+                    flatCols = Arrays.copyOf(flatCols, room);
+                    flatA = Arrays.copyOf(flatA, room);
+                    flatB = Arrays.copyOf(flatB, room);
+                }
+                segStart[s] = at;
+                segLength[s] = cols.length;
+            }
+            System.arraycopy(cols, 0, flatCols, at, cols.length);
+            segSource[s] = cols;
         }
-        boolean useA = side[row] == 0;
-        stampedAt[row] = j instanceof Jacobian.Kept kept ? kept.size() : -1;
+        boolean useA = side[s] == 0;
+        stampedAt[s] = j instanceof Jacobian.Kept kept ? kept.size() : -1;
+        stampedSide[s] = side[s];
         for (int k = 0; k < cols.length; k++) {
-            gradA[row][k] = da[k];
-            gradB[row][k] = db[k];
+            flatA[at + k] = da[k];
+            flatB[at + k] = db[k];
             if (cols[k] >= 0) {
                 j.add(row, cols[k], useA ? da[k] : db[k]);
             }
         }
     }
 
-    /** Where each complementarity row's entries start in the Jacobian it was last stamped into; −1 unknown. */
-    private int[] stampedAt;
-
+    /** Rewrites the entries of the rows whose side changed since they were stamped; the others hold already. */
     @Override
     public boolean restampSides(Jacobian.Kept j) {
         if (side == null) {
             return true;
         }
-        for (int row : pairRows) {
-            if (side[row] < 0 || pairCols[row] == null) {
+        for (int s = 0; s < side.length; s++) {
+            if (side[s] < 0 || segStart[s] < 0 || side[s] == stampedSide[s]) {
                 continue;
             }
-            int at = stampedAt[row];
+            int at = stampedAt[s];
             if (at < 0) {
                 return false;
             }
-            boolean useA = side[row] == 0;
-            int[] cols = pairCols[row];
-            for (int k = 0; k < cols.length; k++) {
-                if (cols[k] >= 0) {
-                    j.set(at++, useA ? gradA[row][k] : gradB[row][k]);
+            double[] grad = side[s] == 0 ? flatA : flatB;
+            for (int t = segStart[s], end = t + segLength[s]; t < end; t++) {
+                if (flatCols[t] >= 0) {
+                    j.set(at++, grad[t]);
                 }
             }
+            stampedSide[s] = side[s];
         }
         return true;
     }
@@ -302,9 +341,7 @@ public final class Network implements NonlinearSystem {
     @Override
     public void beginRun() {
         if (side != null) {
-            for (int row : pairRows) {
-                side[row] = -1;
-            }
+            Arrays.fill(side, (byte) -1);
         }
     }
 
@@ -314,9 +351,9 @@ public final class Network implements NonlinearSystem {
         if (side == null) {
             return;
         }
-        for (int i : pairRows) {
-            if (side[i] >= 0) {
-                out[i] = side[i] == 0 ? pairA[i] : pairB[i];
+        for (int s = 0; s < side.length; s++) {
+            if (side[s] >= 0) {
+                out[pairRows[s]] = side[s] == 0 ? pairA[s] : pairB[s];
             }
         }
     }
@@ -326,38 +363,33 @@ public final class Network implements NonlinearSystem {
         if (side == null) {
             return 0;
         }
-        if (previousSide == null) {
-            previousSide = new byte[side.length];
-        }
-        for (int i : pairRows) {
-            previousSide[i] = side[i];
-        }
+        System.arraycopy(side, 0, previousSide, 0, side.length);
         int switched = 0;
         int worst = -1;
         double worstValue = 0;
-        for (int i : pairRows) {
-            if (side[i] < 0 || pairCols[i] == null) {
+        for (int s = 0; s < side.length; s++) {
+            if (side[s] < 0 || segStart[s] < 0) {
                 continue;
             }
-            double a = pairA[i];
-            double b = pairB[i];
-            int[] cols = pairCols[i];
-            for (int k = 0; k < cols.length; k++) {
-                if (cols[k] >= 0) {
-                    a += gradA[i][k] * dx[cols[k]];
-                    b += gradB[i][k] * dx[cols[k]];
+            double a = pairA[s];
+            double b = pairB[s];
+            for (int t = segStart[s], end = t + segLength[s]; t < end; t++) {
+                int c = flatCols[t];
+                if (c >= 0) {
+                    a += flatA[t] * dx[c];
+                    b += flatB[t] * dx[c];
                 }
             }
             // the side in force is zero after the step; the other must not go negative
-            double free = side[i] == 0 ? b : a;
+            double free = side[s] == 0 ? b : a;
             if (free < -SIDE_SLACK) {
                 if (onlyWorst) {
                     if (free < worstValue) {
                         worstValue = free;
-                        worst = i;
+                        worst = s;
                     }
                 } else {
-                    side[i] = (byte) (1 - side[i]);
+                    side[s] = (byte) (1 - side[s]);
                 }
                 switched++;
             }
@@ -371,14 +403,10 @@ public final class Network implements NonlinearSystem {
 
     @Override
     public void undoSwitch() {
-        if (previousSide != null) {
-            for (int i : pairRows) {
-                side[i] = previousSide[i];
-            }
+        if (side != null) {
+            System.arraycopy(previousSide, 0, side, 0, side.length);
         }
     }
-
-    private byte[] previousSide;
 
     /** How far below zero the predicted free side may go before the row changes side (dimensionless). */
     private static final double SIDE_SLACK = 1e-12;
