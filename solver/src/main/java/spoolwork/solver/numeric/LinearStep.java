@@ -200,7 +200,7 @@ final class LinearStep implements Jacobian.Kept {
         if (!reusable) {
             return null;
         }
-        return dense ? denseSubstitute(denseLu, rhs) : substitute(plan, rhs);
+        return dense ? denseSubstitute(denseLu, rhs) : substitute(plan, rhs, false);
     }
 
     private double[] solveDense(double[] rhs, double[] rowScale, double[] colScale) {
@@ -316,16 +316,17 @@ final class LinearStep implements Jacobian.Kept {
         if (!(updated ? pl.lu.factorChanged(pl.values, pl.touched, pl.touchedCount) : pl.lu.factor(pl.values))) {
             return null;
         }
-        double[] out = substitute(pl, rhs);
+        double[] out = substitute(pl, rhs, updated);
         reusable = out != null;
         return out;
     }
 
     /**
      * The step for the right-hand side rhs with the plan's condensed matrix as last factorised: condense rhs,
-     * solve for the kept unknowns, then back-substitute the eliminated ones.
+     * solve for the kept unknowns, then back-substitute the eliminated ones. {@code updated}: the factorisation
+     * is that of {@link Plan#update} after the last solve, whose answer then starts this one.
      */
-    private double[] substitute(Plan pl, double[] rhs) {
+    private double[] substitute(Plan pl, double[] rhs, boolean updated) {
         double[] pivot = pl.pivot;
         double[] rowVal = pl.rowVal;
         double[] colVal = pl.colVal;
@@ -345,7 +346,11 @@ final class LinearStep implements Jacobian.Kept {
                 }
             }
         }
-        pl.lu.solve(y, y);
+        if (updated) {
+            pl.lu.solveChanged(y, y);
+        } else {
+            pl.lu.solve(y, y);
+        }
         // two output arrays in turn, so that the step of the round before stays valid (Newton keeps it)
         double[] out = outputs[nextOutput];
         nextOutput = 1 - nextOutput;

@@ -264,6 +264,8 @@ final class SparseLu {
      */
     boolean factor(double[] values) {
         lastSucceeded = false;
+        solutionKept = false;
+        changeCount = -1;
         for (int p = 0; p < ap[n]; p++) {
             if (!Double.isFinite(values[p])) {
                 factored = false;
@@ -306,6 +308,10 @@ final class SparseLu {
             return factor(values);
         }
         lastSucceeded = false;
+        // the answer of the last solve can start the next one only if no other refactorisation came between
+        boolean keep = solutionKept && changeCount < 0;
+        solutionKept = false;
+        changeCount = -1;
         if (colOf == null) {
             colOf = new int[ap[n]];
             for (int j = 0; j < n; j++) {
@@ -341,12 +347,73 @@ final class SparseLu {
                 changed[li[t]] = true;
             }
         }
-        for (int e = 0; e < count; e++) {
-            last[entries[e]] = values[entries[e]];
+        // the changes of the listed entries, each once (a repeated entry finds its change made), for solveChanged
+        if (deltaEntry.length < count) {
+            deltaEntry = new int[Math.max(count, 2 * deltaEntry.length)];
+            deltaValue = new double[deltaEntry.length];
         }
+        int changes = 0;
+        for (int e = 0; e < count; e++) {
+            int p = entries[e];
+            double d = values[p] - last[p];
+            if (d != 0) {
+                deltaEntry[changes] = p;
+                deltaValue[changes++] = d;
+            }
+            last[p] = values[p];
+        }
+        solutionKept = keep;
+        changeCount = changes;
         lastSucceeded = true;
         return true;
     }
+
+    /**
+     * The last solve's right-hand side and answer, while they belong to the matrix last factorised, or to the
+     * one before a {@link #factorChanged} whose changes are in deltaEntry and deltaValue.
+     */
+    private double[] keptB;
+    private double[] keptX;
+    private boolean solutionKept;
+    /** Changes of A made by the last {@link #factorChanged} since the kept solution; −1 when there are none. */
+    private int changeCount = -1;
+    private int[] deltaEntry = new int[16];
+    private double[] deltaValue = new double[16];
+
+    /**
+     * Solves A·out = b, like {@link #solve}, right after a {@link #factorChanged}: from the answer x₀ of the
+     * solve before, whose matrix differed from A by ΔA in a few entries, out = x₀ + A⁻¹·(b − b₀ − ΔA·x₀). The
+     * correction's right-hand side is zero outside the rows that changed (and those whose b changed), so the
+     * forward substitution only touches the columns of L they reach. The residual of out is that of x₀ plus
+     * the rounding of the correction. Falls back to a plain solve when there is no such answer to start from.
+     */
+    void solveChanged(double[] b, double[] out) {
+        if (!solutionKept || changeCount < 0) {
+            solve(b, out);
+            return;
+        }
+        if (correction == null) {
+            correction = new double[n];
+        }
+        double[] r = correction;
+        for (int i = 0; i < n; i++) {
+            r[i] = b[i] - keptB[i];
+        }
+        for (int e = 0; e < changeCount; e++) {
+            int p = deltaEntry[e];
+            r[ai[p]] -= deltaValue[e] * keptX[colOf[p]];
+        }
+        // b is kept before out, which may be the same array, is written
+        System.arraycopy(b, 0, keptB, 0, n);
+        substitute(r, r);
+        for (int i = 0; i < n; i++) {
+            out[i] = keptX[i] + r[i];
+        }
+        System.arraycopy(out, 0, keptX, 0, n);
+        changeCount = -1;
+    }
+
+    private double[] correction;
 
     /**
      * Left-looking LU with threshold partial pivoting from column {@code from} on; finds the patterns of L
@@ -687,13 +754,26 @@ final class SparseLu {
     private boolean rowPlaceValid;
 
     /**
-     * Solves A·out = b with the last successful factorisation; b and out may be the same array. Uses only
-     * the object's own work array.
+     * Solves A·out = b with the last successful factorisation; b and out may be the same array. Keeps b and
+     * the answer for a {@link #solveChanged} after the next {@link #factorChanged}.
      */
     void solve(double[] b, double[] out) {
         if (!factored) {
             throw new IllegalStateException("sparse LU: solve before a successful factorisation");
         }
+        if (keptB == null) {
+            keptB = new double[n];
+            keptX = new double[n];
+        }
+        System.arraycopy(b, 0, keptB, 0, n);
+        substitute(b, out);
+        System.arraycopy(out, 0, keptX, 0, n);
+        solutionKept = true;
+        changeCount = -1;
+    }
+
+    /** The forward and back substitutions; zeros in b and in the partial answers are skipped. */
+    private void substitute(double[] b, double[] out) {
         double[] y = x;
         for (int k = 0; k < n; k++) {
             y[k] = b[prow[k]];

@@ -604,6 +604,53 @@ class SparseLuTest {
     }
 
     @Test
+    void aSolveRightAfterAListedRefactorStartsFromTheAnswerBefore() {
+        for (long seed = 0; seed < 5; seed++) {
+            Numbered nb = numberedWithConstraints(seed);
+            Sparse b = nb.b();
+            int n = nb.n();
+            SparseLu lu = nb.lu();
+            assertTrue(lu.factor(b.values()));
+            double[] rhs = randomVector(n, seed);
+            double[] x = new double[n];
+            lu.solve(rhs, x);
+            // two constraint rows change side, and their right-hand sides with them
+            SplittableRandom rnd = new SplittableRandom(100 + seed);
+            Sparse changed = new Sparse(n);
+            changed.entries.putAll(b.entries);
+            java.util.List<Long> keys = new java.util.ArrayList<>(b.entries.keySet());
+            java.util.List<Integer> entries = new java.util.ArrayList<>();
+            double[] rhs2 = rhs.clone();
+            for (int c = 0; c < 2; c++) {
+                int row = nb.inverse()[nb.nodes() + rnd.nextInt(20)];
+                rhs2[row] = rnd.nextDouble(-1, 1);
+                for (int t = 0; t < keys.size(); t++) {
+                    long key = keys.get(t);
+                    if (key % n == row) {
+                        changed.entries.put(key, key / n == row ? 1.0 : 0.0);
+                        entries.add(t);
+                    }
+                }
+            }
+            int[] list = entries.stream().mapToInt(Integer::intValue).toArray();
+            assertTrue(lu.factorChanged(changed.values(), list, list.length));
+            double[] fromBefore = rhs2.clone();
+            lu.solveChanged(fromBefore, fromBefore);
+            double[] fresh = new double[n];
+            lu.solve(rhs2, fresh);
+            assertTrue(backwardError(changed, fromBefore, rhs2) <= BACKWARD_ERROR, "seed " + seed);
+            double scale = Arrays.stream(fresh).map(Math::abs).max().orElse(1);
+            for (int i = 0; i < n; i++) {
+                assertEquals(fresh[i], fromBefore[i], 1e-10 * scale, "seed " + seed + " unknown " + i);
+            }
+            // with no listed refactorisation since the last solve it is a plain solve
+            double[] again = rhs2.clone();
+            lu.solveChanged(again, again);
+            assertArrayEquals(fresh, again, 0, "seed " + seed);
+        }
+    }
+
+    @Test
     void aPatternThatMissesAnEntryOfTheMatrixIsRejected() {
         // [[1, 1], [1, 1]] with nothing below the diagonal of L: entry (1, 0) has no place
         int[] colPtr = {0, 2, 4};
