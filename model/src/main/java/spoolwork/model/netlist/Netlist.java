@@ -231,17 +231,8 @@ public final class Netlist {
      * are numbered consecutively in the type's port order); −1 if c has no such hydraulic port.
      */
     public static int portAt(int first, Component c, String port) {
-        int i = first;
-        for (PortSpec p : c.type().ports()) {
-            if (p.mechanical()) {
-                continue;
-            }
-            if (p.name().equals(port)) {
-                return i;
-            }
-            i++;
-        }
-        return -1;
+        int k = c.type().hydraulicPortIndex(port);
+        return k < 0 ? -1 : first + k;
     }
 
     /** Number of nodes; they are numbered from 0 in the order of {@code graph().vertexSet()}. */
