@@ -401,6 +401,28 @@ public enum ComponentType {
             }
             return out;
         }
+        return MainPaths.OF[ordinal()];
+    }
+
+    /**
+     * The internal paths of every type but the directional valves, built once: they are constants of the
+     * catalogue, and the netlist asks for them once per component per solve.
+     */
+    private static final class MainPaths {
+        static final List<List<String>>[] OF = table();
+
+        @SuppressWarnings("unchecked")
+        private static List<List<String>>[] table() {
+            List<List<String>>[] of = new List[values().length];
+            for (ComponentType t : values()) {
+                of[t.ordinal()] = t.mainPaths();
+            }
+            return of;
+        }
+    }
+
+    /** The paths {@link #internalPaths} gives for a type that is not a directional valve. */
+    private List<List<String>> mainPaths() {
         switch (this) {
             case RESERVOIR:
                 return List.of(List.of("S", "T"));
