@@ -16,8 +16,11 @@ public record ActuatorState(Mode mode, LoadKind loadKind, double load) {
         Objects.requireNonNull(loadKind);
     }
 
+    /** Free with no load: one value, as a state is asked for it once per actuator it leaves unset. */
+    private static final ActuatorState FREE = new ActuatorState(Mode.FREE, LoadKind.CONSTANT, 0);
+
     public static ActuatorState free() {
-        return new ActuatorState(Mode.FREE, LoadKind.CONSTANT, 0);
+        return FREE;
     }
 
     public enum Mode {

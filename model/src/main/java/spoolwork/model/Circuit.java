@@ -242,16 +242,18 @@ public final class Circuit {
         return fluid;
     }
 
-    /** Components in drawing order (unmodifiable view). */
-    public Collection<Component> components() {
+    /** Components in drawing order (unmodifiable); a list, so that a walk by index needs no iterator. */
+    public List<Component> components() {
         return componentList;
     }
 
-    public Collection<Junction> junctions() {
+    /** Junctions in drawing order (unmodifiable). */
+    public List<Junction> junctions() {
         return junctionList;
     }
 
-    public Collection<Line> lines() {
+    /** Lines in drawing order (unmodifiable). */
+    public List<Line> lines() {
         return lineList;
     }
 

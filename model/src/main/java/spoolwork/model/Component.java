@@ -1,6 +1,5 @@
 package spoolwork.model;
 
-import java.util.Collections;
 import java.util.LinkedHashMap;
 import java.util.Map;
 import java.util.Objects;
@@ -50,8 +49,9 @@ public record Component(String id, String tag, ComponentType type, double x, dou
                 throw new IllegalArgumentException(type.key() + " has no option " + k);
             }
         }
-        params = Collections.unmodifiableMap(p);
-        options = Collections.unmodifiableMap(o);
+        // read by key many times per solve: a few keys scanned beat two wrappers and a hash table
+        params = new SmallMap<>(p);
+        options = new SmallMap<>(o);
     }
 
     /**

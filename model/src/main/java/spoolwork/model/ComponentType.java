@@ -161,6 +161,7 @@ public enum ComponentType {
     private final Category category;
     private final List<PortSpec> ports;
     private final int hydraulicPorts;
+    private final List<String> hydraulicPortNames;
     private final Map<String, ParameterSpec> params;
     private final Map<String, OptionSpec> options;
 
@@ -172,7 +173,8 @@ public enum ComponentType {
         this.tagPrefix = tagPrefix;
         this.category = category;
         this.ports = List.copyOf(b.ports);
-        this.hydraulicPorts = (int) ports.stream().filter(p -> !p.mechanical()).count();
+        this.hydraulicPortNames = ports.stream().filter(p -> !p.mechanical()).map(PortSpec::name).toList();
+        this.hydraulicPorts = hydraulicPortNames.size();
         this.params = Collections.unmodifiableMap(b.params);
         this.options = Collections.unmodifiableMap(b.options);
     }
@@ -207,6 +209,25 @@ public enum ComponentType {
      */
     public int hydraulicPortCount() {
         return hydraulicPorts;
+    }
+
+    /** Names of the hydraulic ports in port order, the order of a component's consecutive node numbers. */
+    public List<String> hydraulicPorts() {
+        return hydraulicPortNames;
+    }
+
+    /**
+     * Position of the named port among the hydraulic ports ({@link #hydraulicPorts}), or −1 when the type has
+     * no hydraulic port of that name. A plain scan of at most four names, without the iterator a walk over
+     * {@link #ports} would make.
+     */
+    public int hydraulicPortIndex(String name) {
+        for (int k = 0; k < hydraulicPorts; k++) {
+            if (hydraulicPortNames.get(k).equals(name)) {
+                return k;
+            }
+        }
+        return -1;
     }
 
     public Optional<PortSpec> port(String name) {
@@ -380,6 +401,28 @@ public enum ComponentType {
             }
             return out;
         }
+        return MainPaths.OF[ordinal()];
+    }
+
+    /**
+     * The internal paths of every type but the directional valves, built once: they are constants of the
+     * catalogue, and the netlist asks for them once per component per solve.
+     */
+    private static final class MainPaths {
+        static final List<List<String>>[] OF = table();
+
+        @SuppressWarnings("unchecked")
+        private static List<List<String>>[] table() {
+            List<List<String>>[] of = new List[values().length];
+            for (ComponentType t : values()) {
+                of[t.ordinal()] = t.mainPaths();
+            }
+            return of;
+        }
+    }
+
+    /** The paths {@link #internalPaths} gives for a type that is not a directional valve. */
+    private List<List<String>> mainPaths() {
         switch (this) {
             case RESERVOIR:
                 return List.of(List.of("S", "T"));

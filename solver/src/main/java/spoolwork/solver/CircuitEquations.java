@@ -62,11 +62,6 @@ final class CircuitEquations {
     final List<List<Element>> componentElements;
     /** Representative names of node indices. */
     final List<String> nodeNames = new ArrayList<>();
-    /** Elements of each component id. */
-    final Map<String, List<Element>> elementsOf;
-    /** Loss-bearing line elements by line id. */
-    final Map<String, Branch> lineBranches;
-    final Map<String, Double> pumpSpeeds = new LinkedHashMap<>();
     final NodeConductance nodes;
 
     CircuitEquations(Circuit circuit, OperatingState state, Netlist netlist, SolverOptions options) {
@@ -82,18 +77,16 @@ final class CircuitEquations {
         this.lineBranch = new Branch[lineCount];
         int componentCount = circuit.components().size();
         this.componentElements = new ArrayList<>(componentCount);
-        this.elementsOf = new LinkedHashMap<>(capacity(componentCount));
-        this.lineBranches = new LinkedHashMap<>(capacity(lineCount));
         double pRef = 1e6;
         double qRef = 0;
-        for (Component c : circuit.components()) {
+        List<Component> components = circuit.components();
+        for (int ci = 0; ci < componentCount; ci++) {
+            Component c = components.get(ci);
             for (String k : SETTINGS_OF[c.type().ordinal()]) {
                 pRef = Math.max(pRef, c.param(k));
             }
             if (c.type().isPump()) {
-                double n = speedOf(c);
-                pumpSpeeds.put(c.id(), n);
-                qRef += c.param("displacement") * n;
+                qRef += c.param("displacement") * speedOf(c);
             }
         }
         // about one unknown per node, per line and per element, and a few per component
@@ -107,9 +100,9 @@ final class CircuitEquations {
         }
         nodes = new NodeConductance(all, nodeNames.toArray(new String[0]));
         net.addElement(nodes);
-        int li = -1;
-        for (Line l : circuit.lines()) {
-            li++;
+        List<Line> lines = circuit.lines();
+        for (int li = 0; li < lineCount; li++) {
+            Line l = lines.get(li);
             if (l.kind() == LineKind.SHAFT || l.ideal()) {
                 continue;
             }
@@ -119,17 +112,19 @@ final class CircuitEquations {
                     net);
             net.addElement(b);
             lineBranch[li] = b;
-            lineBranches.put(l.id(), b);
         }
         int base = 0;
-        for (Component c : circuit.components()) {
-            List<Element> es = new ArrayList<>();
+        for (int ci = 0; ci < componentCount; ci++) {
+            Component c = components.get(ci);
+            // most components are one element, a few two, a directional valve up to six
+            List<Element> es = new ArrayList<>(2);
             building = c;
             buildingBase = base;
             build(c, es);
             base += c.type().hydraulicPortCount();
-            es.forEach(net::addElement);
-            elementsOf.put(c.id(), es);
+            for (int k = 0; k < es.size(); k++) {
+                net.addElement(es.get(k));
+            }
             componentElements.add(es);
         }
         building = null;
@@ -331,7 +326,7 @@ final class CircuitEquations {
                 boolean comp = c.type() == ComponentType.COMPENSATED_PUMP;
                 int drain = comp && connected(c, "L") ? node(c, "L") : Integer.MIN_VALUE;
                 Pump p = new Pump(t, node(c, "S"), node(c, "P"), drain, c.param("displacement"),
-                        pumpSpeeds.get(c.id()), c.param("volumetric_efficiency"), c.param("overall_efficiency"),
+                        speedOf(c), c.param("volumetric_efficiency"), c.param("overall_efficiency"),
                         c.param("reference_pressure"), comp, comp ? c.param("compensator_setting") : 0,
                         comp ? c.param("compensator_band") : 1, net);
                 es.add(p);

@@ -1,7 +1,6 @@
 package spoolwork.solver;
 
 import java.util.ArrayList;
-import java.util.EnumMap;
 import java.util.HashMap;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -13,8 +12,8 @@ import spoolwork.model.ComponentType;
 import spoolwork.model.Line;
 import spoolwork.model.LineKind;
 import spoolwork.model.OperatingState;
-import spoolwork.model.PortSpec;
 import spoolwork.model.netlist.Netlist;
+import spoolwork.solver.elements.Branch;
 import spoolwork.solver.elements.Element;
 import spoolwork.solver.elements.Network;
 import spoolwork.solver.elements.PowerKind;
@@ -184,6 +183,17 @@ public final class SteadyStateSolver {
         return (int) (entries / 0.75f) + 1;
     }
 
+    /** By component type: its hydraulic port names, the key array shared by the port maps of its results. */
+    private static final Object[][] PORT_KEYS = new Object[ComponentType.values().length][];
+
+    static {
+        for (ComponentType t : ComponentType.values()) {
+            PORT_KEYS[t.ordinal()] = t.hydraulicPorts().toArray();
+        }
+    }
+
+    private static final Object[] NONE = {};
+
     private Solution results(CircuitEquations eq, OperatingState state, double[] x, int iterations,
                              List<Diagnostic> diagnostics) {
         Circuit circuit = eq.circuit;
@@ -192,60 +202,69 @@ public final class SteadyStateSolver {
         double[] power = new double[PowerKind.values().length];
         Report nodeReport = new Report();
         eq.nodes.report(x, net, nodeReport);
-        for (Element b : eq.lineBranches.values()) {
-            b.report(x, net, nodeReport);
+        for (Branch b : eq.lineBranch) {
+            if (b != null) {
+                b.report(x, net, nodeReport);
+            }
         }
         for (int k = 0; k < power.length; k++) {
             power[k] += nodeReport.power[k];
         }
-        LinkedHashMap<String, ComponentResult> comps = new LinkedHashMap<>(capacity(circuit.components().size()));
+        List<Component> components = circuit.components();
+        int count = components.size();
+        // every component's report and port results; the maps of its result are made once all are final
+        Report[] reports = new Report[count];
+        PortResult[][] portResults = new PortResult[count][];
+        int[] firstNode = new int[count];
         // flow into its component at every port, by netlist node number: component ports come first, in
         // drawing order and port order
         double[] portFlowInto = new double[eq.netlist.nodeCount()];
         int node = 0;
-        int ci = 0;
         double pumpInput = 0;
         double pumpHydraulic = 0;
         Map<String, Double> inputByPump = new HashMap<>();
         // cavitation warnings, in drawing order; they follow the prime movers' warnings
         List<Diagnostic> cavitation = new ArrayList<>();
-        for (Component c : circuit.components()) {
-            Report rep = new Report();
-            for (Element e : eq.componentElements.get(ci++)) {
-                e.report(x, net, rep);
+        for (int ci = 0; ci < count; ci++) {
+            Component c = components.get(ci);
+            Report rep = new Report(c.type().hydraulicPorts());
+            List<Element> elements = eq.componentElements.get(ci);
+            for (int k = 0; k < elements.size(); k++) {
+                elements.get(k).report(x, net, rep);
             }
             for (int k = 0; k < power.length; k++) {
                 power[k] += rep.power[k];
             }
-            LinkedHashMap<String, PortResult> ports = new LinkedHashMap<>();
-            for (PortSpec ps : c.type().ports()) {
-                if (ps.mechanical()) {
-                    continue;
-                }
+            firstNode[ci] = node;
+            PortResult[] ports = new PortResult[c.type().hydraulicPortCount()];
+            for (int k = 0; k < ports.length; k++) {
                 int i = eq.nodeAt[node];
-                double q = rep.portFlows.getOrDefault(ps.name(), 0.0);
-                ports.put(ps.name(), new PortResult(i < 0 ? 0 : x[i], q));
+                double q = rep.flowAt(k);
+                ports[k] = new PortResult(i < 0 ? 0 : x[i], q);
                 portFlowInto[node] = q;
                 node++;
             }
-            // the report is this component's alone, so its values become the result's
-            Map<String, Double> values = rep.values;
-            extras(c, ports, values, rep);
+            extras(c, ports, rep);
             if (c.type().isPump()) {
-                pumpInput += values.get("input_power_w");
-                pumpHydraulic += values.get("hydraulic_power_w");
-                inputByPump.put(c.id(), values.get("input_power_w"));
+                double input = rep.valueOf("input_power_w");
+                pumpInput += input;
+                pumpHydraulic += rep.valueOf("hydraulic_power_w");
+                inputByPump.put(c.id(), input);
                 // only a pump reports its inlet's absolute pressure
-                Double abs = values.get("inlet_pressure_abs_pa");
-                if (abs != null && abs < 0.8e5) {
-                    cavitation.add(new Diagnostic(Severity.WARNING, String.format(java.util.Locale.ROOT,
-                            "pump %s inlet is at %.2f bar absolute, below about 0.8 bar (common practice): risk of cavitation",
-                            c.tag(), abs / 1e5), List.of(c.tag())));
+                if (rep.hasValue("inlet_pressure_abs_pa")) {
+                    double abs = rep.valueOf("inlet_pressure_abs_pa");
+                    if (abs < 0.8e5) {
+                        cavitation.add(new Diagnostic(Severity.WARNING, String.format(java.util.Locale.ROOT,
+                                "pump %s inlet is at %.2f bar absolute, below about 0.8 bar (common practice): risk of cavitation",
+                                c.tag(), abs / 1e5), List.of(c.tag())));
+                    }
                 }
             }
-            comps.put(c.tag(), new ComponentResult(c.id(), c.tag(), c.type(), Frozen.own(ports), Frozen.own(values)));
+            reports[ci] = rep;
+            portResults[ci] = ports;
         }
-        for (Component c : circuit.components()) {
+        for (int ci = 0; ci < count; ci++) {
+            Component c = components.get(ci);
             if (c.type() != ComponentType.PRIME_MOVER) {
                 continue;
             }
@@ -255,17 +274,15 @@ public final class SteadyStateSolver {
                     load += inputByPump.getOrDefault(d.getKey(), 0.0);
                 }
             }
-            LinkedHashMap<String, Double> values = new LinkedHashMap<>(comps.get(c.tag()).values());
+            Report rep = reports[ci];
             double speed = state.speeds().getOrDefault(c.id(), c.param("speed"));
-            values.put("speed_rpm", speed * 60);
-            values.put("shaft_power_w", load);
-            values.put("rated_power_w", c.param("rated_power"));
-            values.put("load_ratio", load / c.param("rated_power"));
+            rep.setValue("speed_rpm", speed * 60);
+            rep.setValue("shaft_power_w", load);
+            rep.setValue("rated_power_w", c.param("rated_power"));
+            rep.setValue("load_ratio", load / c.param("rated_power"));
             if (speed > 0) {
-                values.put("torque_nm", load / (2 * Math.PI * speed));
+                rep.setValue("torque_nm", load / (2 * Math.PI * speed));
             }
-            comps.put(c.tag(), new ComponentResult(c.id(), c.tag(), c.type(), comps.get(c.tag()).ports(),
-                    Frozen.own(values)));
             if (load > c.param("rated_power")) {
                 diagnostics.add(new Diagnostic(Severity.WARNING, String.format(java.util.Locale.ROOT,
                         "prime mover %s is loaded to %.0f %% of its rating in state %s", c.tag(),
@@ -274,7 +291,15 @@ public final class SteadyStateSolver {
         }
         LineResult[] byLine = new LineResult[eq.lineStart.length];
         LinkedHashMap<String, LineResult> lines = lineResults(eq, x, portFlowInto, byLine);
-        reservoirPortFlows(eq, byLine, comps);
+        reservoirPortFlows(eq, byLine, firstNode, portResults);
+        LinkedHashMap<String, ComponentResult> comps = new LinkedHashMap<>(capacity(count));
+        for (int ci = 0; ci < count; ci++) {
+            Component c = components.get(ci);
+            PortResult[] ports = portResults[ci];
+            Map<String, PortResult> portMap = Frozen.of(ports.length == 0 ? NONE : PORT_KEYS[c.type().ordinal()],
+                    ports, ports.length);
+            comps.put(c.tag(), new ComponentResult(c.id(), c.tag(), c.type(), portMap, values(reports[ci])));
+        }
         double pumpLoss = pumpInput - pumpHydraulic;
         PowerBalance balance = new PowerBalance(pumpInput, pumpHydraulic, power[PowerKind.USEFUL.ordinal()],
                 power[PowerKind.RELIEF.ordinal()], power[PowerKind.THROTTLE.ordinal()],
@@ -285,34 +310,53 @@ public final class SteadyStateSolver {
                 balance);
     }
 
-    private void extras(Component c, Map<String, PortResult> ports, Map<String, Double> values, Report rep) {
+    /** A component's reported values as its result's map, in the order first reported. */
+    private static Map<String, Double> values(Report rep) {
+        int n = rep.valueCount();
+        if (n == 0) {
+            return Frozen.of(NONE, NONE, 0);
+        }
+        Object[] keys = new Object[n];
+        Object[] values = new Object[n];
+        for (int i = 0; i < n; i++) {
+            keys[i] = rep.valueKey(i);
+            values[i] = rep.valueAt(i);
+        }
+        return Frozen.of(keys, values, n);
+    }
+
+    private static PortResult port(Component c, PortResult[] ports, String name) {
+        return ports[c.type().hydraulicPortIndex(name)];
+    }
+
+    private void extras(Component c, PortResult[] ports, Report rep) {
         switch (c.type()) {
             case DOUBLE_ACTING_CYLINDER, SINGLE_ACTING_CYLINDER, DOUBLE_ROD_CYLINDER -> {
-                double v = values.get("velocity_mps");
+                double v = rep.valueOf("velocity_mps");
                 if (Math.abs(v) > 1e-9) {
-                    values.put("stroke_time_s", c.param("stroke") / Math.abs(v));
+                    rep.setValue("stroke_time_s", c.param("stroke") / Math.abs(v));
                 }
             }
             case ACCUMULATOR -> {
-                double p1 = ports.get("P").pressure() + ATMOSPHERE;
+                double p1 = port(c, ports, "P").pressure() + ATMOSPHERE;
                 double p0 = c.param("precharge") + ATMOSPHERE;
                 double v0 = c.param("volume");
                 double isoGas = p1 > p0 ? v0 * p0 / p1 : v0;
                 double adGas = p1 > p0 ? v0 * Math.pow(p0 / p1, 1 / 1.4) : v0;
-                values.put("stored_volume_isothermal_m3", v0 - isoGas);
-                values.put("stored_volume_adiabatic_m3", v0 - adGas);
-                values.put("gas_energy_isothermal_j", p1 > p0 ? p0 * v0 * Math.log(p1 / p0) : 0);
-                values.put("gas_energy_adiabatic_j", p1 > p0 ? (p1 * adGas - p0 * v0) / 0.4 : 0);
+                rep.setValue("stored_volume_isothermal_m3", v0 - isoGas);
+                rep.setValue("stored_volume_adiabatic_m3", v0 - adGas);
+                rep.setValue("gas_energy_isothermal_j", p1 > p0 ? p0 * v0 * Math.log(p1 / p0) : 0);
+                rep.setValue("gas_energy_adiabatic_j", p1 > p0 ? (p1 * adGas - p0 * v0) / 0.4 : 0);
             }
-            case PRESSURE_GAUGE -> values.put("pressure_pa", ports.get("P").pressure());
+            case PRESSURE_GAUGE -> rep.setValue("pressure_pa", port(c, ports, "P").pressure());
             case ORIFICE, THROTTLE, FILTER, COOLER, CHECK_VALVE, PILOT_CHECK_VALVE, SEQUENCE_VALVE, REDUCING_VALVE,
                     COUNTERBALANCE_VALVE, FLOW_METER -> {
-                values.putIfAbsent("power_loss_w", rep.totalPower());
+                rep.setValueIfAbsent("power_loss_w", rep.totalPower());
                 String in = c.type().ports().get(0).name();
-                values.putIfAbsent("flow_m3s", ports.get(in).flow());
+                rep.setValueIfAbsent("flow_m3s", port(c, ports, in).flow());
             }
             case DIRECTIONAL_2_2, DIRECTIONAL_3_2, DIRECTIONAL_4_2, DIRECTIONAL_4_3 -> {
-                values.put("power_loss_w", rep.totalPower());
+                rep.setValue("power_loss_w", rep.totalPower());
             }
             default -> {
             }
@@ -322,13 +366,17 @@ public final class SteadyStateSolver {
     /**
      * A reservoir has no element law (its ports are the reference pressure), so the flow into each of its
      * ports is what its lines carry to it: a line's flow counts positive towards its end.
+     *
+     * @param firstNode   netlist number of every component's first hydraulic port, in drawing order
+     * @param portResults every component's port results, replaced here for the reservoirs
      */
-    private static void reservoirPortFlows(CircuitEquations eq, LineResult[] byLine,
-                                           Map<String, ComponentResult> comps) {
+    private static void reservoirPortFlows(CircuitEquations eq, LineResult[] byLine, int[] firstNode,
+                                           PortResult[][] portResults) {
         // flow in at every netlist node, summed over the lines in drawing order
         double[] in = null;
-        for (Component c : eq.circuit.components()) {
-            if (c.type() != ComponentType.RESERVOIR) {
+        List<Component> components = eq.circuit.components();
+        for (int ci = 0; ci < components.size(); ci++) {
+            if (components.get(ci).type() != ComponentType.RESERVOIR) {
                 continue;
             }
             if (in == null) {
@@ -342,13 +390,10 @@ public final class SteadyStateSolver {
                     in[eq.lineStart[li]] -= lr.flow();
                 }
             }
-            ComponentResult r = comps.get(c.tag());
-            LinkedHashMap<String, PortResult> ports = new LinkedHashMap<>();
-            for (Map.Entry<String, PortResult> e : r.ports().entrySet()) {
-                int port = eq.netlist.portIndex(c.id(), e.getKey());
-                ports.put(e.getKey(), new PortResult(e.getValue().pressure(), in[port]));
+            PortResult[] ports = portResults[ci];
+            for (int k = 0; k < ports.length; k++) {
+                ports[k] = new PortResult(ports[k].pressure(), in[firstNode[ci] + k]);
             }
-            comps.put(c.tag(), new ComponentResult(c.id(), c.tag(), c.type(), Frozen.own(ports), r.values()));
         }
     }
 

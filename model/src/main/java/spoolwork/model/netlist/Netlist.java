@@ -28,7 +28,6 @@ import spoolwork.model.Junction;
 import spoolwork.model.Line;
 import spoolwork.model.LineKind;
 import spoolwork.model.OperatingState;
-import spoolwork.model.PortSpec;
 
 /**
  * The hydraulic connectivity of a circuit in one operating state, as a JGraphT multigraph.
@@ -88,17 +87,18 @@ public final class Netlist {
         reservoirNodes = new int[reservoirCount];
         int k = 0;
         int r = 0;
-        for (Component c : circuit.components()) {
+        List<Component> components = circuit.components();
+        for (int ci = 0; ci < components.size(); ci++) {
+            Component c = components.get(ci);
             firstNode.put(c.id(), k);
-            for (PortSpec p : c.type().ports()) {
-                if (!p.mechanical()) {
-                    NetNode n = new NetNode.Port(c.id(), p.name());
-                    if (c.type() == ComponentType.RESERVOIR) {
-                        reservoirNodes[r++] = k;
-                    }
-                    ownerOf[k] = c;
-                    nodes[k++] = n;
+            List<String> ports = c.type().hydraulicPorts();
+            for (int pi = 0; pi < ports.size(); pi++) {
+                NetNode n = new NetNode.Port(c.id(), ports.get(pi));
+                if (c.type() == ComponentType.RESERVOIR) {
+                    reservoirNodes[r++] = k;
                 }
+                ownerOf[k] = c;
+                nodes[k++] = n;
             }
         }
         for (Junction j : circuit.junctions()) {
@@ -113,7 +113,9 @@ public final class Netlist {
         int[] dst = new int[maxEdges];
         NetEdge[] es = new NetEdge[maxEdges];
         int m = 0;
-        for (Line l : circuit.lines()) {
+        List<Line> lines = circuit.lines();
+        for (int li = 0; li < lines.size(); li++) {
+            Line l = lines.get(li);
             if (l.kind() == LineKind.SHAFT) {
                 Component a = circuit.component(l.from().ownerId()).orElseThrow();
                 Component b = circuit.component(l.to().ownerId()).orElseThrow();
@@ -141,13 +143,15 @@ public final class Netlist {
         this.lineEdgeCount = m;
         // the components' port nodes are numbered in drawing order, so each one's first node is counted here
         int first = 0;
-        for (Component c : circuit.components()) {
+        for (int ci = 0; ci < components.size(); ci++) {
+            Component c = components.get(ci);
             int firstOfC = first;
             first += c.type().hydraulicPortCount();
             // only a directional valve's paths depend on the state, so only a valve looks up its position
             String position = state == null || !c.type().isDirectionalValve() ? null : state.positionOf(c.id());
             List<List<String>> paths = c.type().internalPaths(c.options(), position);
-            for (List<String> path : paths) {
+            for (int pi = 0; pi < paths.size(); pi++) {
+                List<String> path = paths.get(pi);
                 int a = existingPort(firstOfC, c, path.get(0));
                 int b = existingPort(firstOfC, c, path.get(1));
                 NetEdge e = new NetEdge.InternalEdge(c.id(), path.get(0), path.get(1));
@@ -231,17 +235,8 @@ public final class Netlist {
      * are numbered consecutively in the type's port order); −1 if c has no such hydraulic port.
      */
     public static int portAt(int first, Component c, String port) {
-        int i = first;
-        for (PortSpec p : c.type().ports()) {
-            if (p.mechanical()) {
-                continue;
-            }
-            if (p.name().equals(port)) {
-                return i;
-            }
-            i++;
-        }
-        return -1;
+        int k = c.type().hydraulicPortIndex(port);
+        return k < 0 ? -1 : first + k;
     }
 
     /** Number of nodes; they are numbered from 0 in the order of {@code graph().vertexSet()}. */
