@@ -545,6 +545,35 @@ class SparseLuTest {
         }
     }
 
+    /** Entries listed as rewritten: the new matrix and the indices of the stored entries that were written. */
+    private record Rewritten(Sparse matrix, int[] entries, int[] rows) {
+    }
+
+    /**
+     * {@code count} random constraint rows of nb change side: each row holds its own unknown instead of its
+     * node's pressure. Lists the stored entries written, in storage order, and the rows.
+     */
+    private static Rewritten switchSides(Numbered nb, int count, SplittableRandom rnd) {
+        int n = nb.n();
+        Sparse changed = new Sparse(n);
+        changed.entries.putAll(nb.b().entries);
+        java.util.List<Long> keys = new java.util.ArrayList<>(nb.b().entries.keySet());
+        java.util.List<Integer> entries = new java.util.ArrayList<>();
+        int[] rows = new int[count];
+        for (int c = 0; c < count; c++) {
+            int row = nb.inverse()[nb.nodes() + rnd.nextInt(20)];
+            rows[c] = row;
+            for (int t = 0; t < keys.size(); t++) {
+                long key = keys.get(t);
+                if (key % n == row) {
+                    changed.entries.put(key, key / n == row ? 1.0 : 0.0);
+                    entries.add(t);
+                }
+            }
+        }
+        return new Rewritten(changed, entries.stream().mapToInt(Integer::intValue).toArray(), rows);
+    }
+
     @Test
     void aRefactorFromTheListedEntriesMatchesOneThatComparesThemAll() {
         for (long seed = 0; seed < 5; seed++) {
@@ -555,23 +584,11 @@ class SparseLuTest {
             SparseLu compared = nb.lu();
             assertTrue(listed.factor(b.values()));
             assertTrue(compared.factor(b.values()));
-            // three constraint rows change side: the row holds its own unknown instead of its node's pressure
-            SplittableRandom rnd = new SplittableRandom(seed);
-            Sparse changed = new Sparse(n);
-            changed.entries.putAll(b.entries);
+            // three constraint rows change side
+            Rewritten rewritten = switchSides(nb, 3, new SplittableRandom(seed));
+            Sparse changed = rewritten.matrix();
+            int[] list = rewritten.entries();
             java.util.List<Long> keys = new java.util.ArrayList<>(b.entries.keySet());
-            java.util.List<Integer> entries = new java.util.ArrayList<>();
-            for (int c = 0; c < 3; c++) {
-                int row = nb.inverse()[nb.nodes() + rnd.nextInt(20)];
-                for (int t = 0; t < keys.size(); t++) {
-                    long key = keys.get(t);
-                    if (key % n == row) {
-                        changed.entries.put(key, key / n == row ? 1.0 : 0.0);
-                        entries.add(t);
-                    }
-                }
-            }
-            int[] list = entries.stream().mapToInt(Integer::intValue).toArray();
             assertTrue(listed.factorChanged(changed.values(), list, list.length), "seed " + seed);
             assertTrue(compared.factor(changed.values()), "seed " + seed);
             double[] rhs = randomVector(n, seed);
@@ -616,23 +633,13 @@ class SparseLuTest {
             lu.solve(rhs, x);
             // two constraint rows change side, and their right-hand sides with them
             SplittableRandom rnd = new SplittableRandom(100 + seed);
-            Sparse changed = new Sparse(n);
-            changed.entries.putAll(b.entries);
-            java.util.List<Long> keys = new java.util.ArrayList<>(b.entries.keySet());
-            java.util.List<Integer> entries = new java.util.ArrayList<>();
+            Rewritten rewritten = switchSides(nb, 2, rnd);
+            Sparse changed = rewritten.matrix();
+            int[] list = rewritten.entries();
             double[] rhs2 = rhs.clone();
-            for (int c = 0; c < 2; c++) {
-                int row = nb.inverse()[nb.nodes() + rnd.nextInt(20)];
+            for (int row : rewritten.rows()) {
                 rhs2[row] = rnd.nextDouble(-1, 1);
-                for (int t = 0; t < keys.size(); t++) {
-                    long key = keys.get(t);
-                    if (key % n == row) {
-                        changed.entries.put(key, key / n == row ? 1.0 : 0.0);
-                        entries.add(t);
-                    }
-                }
             }
-            int[] list = entries.stream().mapToInt(Integer::intValue).toArray();
             assertTrue(lu.factorChanged(changed.values(), list, list.length));
             double[] fromBefore = rhs2.clone();
             lu.solveChanged(fromBefore, fromBefore);
