@@ -1,38 +1,58 @@
 package spoolwork.model;
 
-import java.util.AbstractMap;
 import java.util.AbstractSet;
 import java.util.Iterator;
 import java.util.Map;
 import java.util.NoSuchElementException;
+import java.util.Objects;
 import java.util.Set;
 import java.util.function.BiConsumer;
 
 /**
  * An unmodifiable map of a few entries in insertion order, kept in two arrays and found by a plain scan.
- * A component's parameters and options are read by key many times in every solve; behind an unmodifiable
- * view of a hash map each read passes two wrappers and a hash table, here it compares a handful of keys,
- * which are usually the very string the caller passes. Equality, hash code and text are those of any
- * {@link Map} with the same entries; every mutator throws {@link UnsupportedOperationException}.
+ * A component's parameters and options, and the solver's results of one component, are read by key many
+ * times; behind an unmodifiable view of a hash map each read passes two wrappers and a hash table, here it
+ * compares a handful of keys, which are usually the very string the caller passes. Every mutator throws
+ * (see {@link ReadOnlyMap}).
  */
-final class SmallMap<V> extends AbstractMap<String, V> {
-    private final String[] keys;
+public final class SmallMap<K, V> extends ReadOnlyMap<K, V> {
+    private final Object[] keys;
     private final Object[] values;
+    private final int size;
 
     /** The entries of m, in its iteration order. Keys must not be null. */
-    SmallMap(Map<String, ? extends V> m) {
-        int n = m.size();
-        keys = new String[n];
-        values = new Object[n];
+    public SmallMap(Map<? extends K, ? extends V> m) {
+        size = m.size();
+        keys = new Object[size];
+        values = new Object[size];
         int i = 0;
-        for (Map.Entry<String, ? extends V> e : m.entrySet()) {
-            keys[i] = java.util.Objects.requireNonNull(e.getKey());
+        for (Map.Entry<? extends K, ? extends V> e : m.entrySet()) {
+            keys[i] = Objects.requireNonNull(e.getKey());
             values[i++] = e.getValue();
         }
     }
 
+    private SmallMap(Object[] keys, Object[] values, int size) {
+        if (size > keys.length || size > values.length) {
+            throw new IllegalArgumentException(size + " entries from arrays of " + keys.length + " keys and "
+                    + values.length + " values");
+        }
+        this.keys = keys;
+        this.values = values;
+        this.size = size;
+    }
+
+    /**
+     * The first {@code size} keys and values of the two arrays, in that order. The arrays are taken over, not
+     * copied: no one may change them afterwards (a key array may be shared by many maps). Keys must be
+     * distinct and not null.
+     */
+    public static <K, V> SmallMap<K, V> of(Object[] keys, Object[] values, int size) {
+        return new SmallMap<>(keys, values, size);
+    }
+
     private int indexOf(Object key) {
-        for (int i = 0; i < keys.length; i++) {
+        for (int i = 0; i < size; i++) {
             if (keys[i].equals(key)) {
                 return i;
             }
@@ -42,7 +62,12 @@ final class SmallMap<V> extends AbstractMap<String, V> {
 
     @Override
     public int size() {
-        return keys.length;
+        return size;
+    }
+
+    @Override
+    public boolean isEmpty() {
+        return size == 0;
     }
 
     @Override
@@ -66,106 +91,41 @@ final class SmallMap<V> extends AbstractMap<String, V> {
 
     @Override
     @SuppressWarnings("unchecked")
-    public void forEach(BiConsumer<? super String, ? super V> action) {
-        for (int i = 0; i < keys.length; i++) {
-            action.accept(keys[i], (V) values[i]);
+    public void forEach(BiConsumer<? super K, ? super V> action) {
+        for (int i = 0; i < size; i++) {
+            action.accept((K) keys[i], (V) values[i]);
         }
     }
 
     @Override
-    public Set<Entry<String, V>> entrySet() {
+    public Set<Entry<K, V>> entrySet() {
         return new AbstractSet<>() {
             @Override
-            public Iterator<Entry<String, V>> iterator() {
+            public Iterator<Entry<K, V>> iterator() {
                 return new Iterator<>() {
                     private int next;
 
                     @Override
                     public boolean hasNext() {
-                        return next < keys.length;
+                        return next < size;
                     }
 
                     @Override
                     @SuppressWarnings("unchecked")
-                    public Entry<String, V> next() {
-                        if (next >= keys.length) {
+                    public Entry<K, V> next() {
+                        if (next >= size) {
                             throw new NoSuchElementException();
                         }
                         int i = next++;
-                        return new SimpleImmutableEntry<>(keys[i], (V) values[i]);
+                        return new SimpleImmutableEntry<>((K) keys[i], (V) values[i]);
                     }
                 };
             }
 
             @Override
             public int size() {
-                return keys.length;
+                return size;
             }
         };
-    }
-
-    @Override
-    public V put(String key, V value) {
-        throw new UnsupportedOperationException();
-    }
-
-    @Override
-    public V remove(Object key) {
-        throw new UnsupportedOperationException();
-    }
-
-    @Override
-    public void putAll(Map<? extends String, ? extends V> m) {
-        throw new UnsupportedOperationException();
-    }
-
-    @Override
-    public void clear() {
-        throw new UnsupportedOperationException();
-    }
-
-    @Override
-    public void replaceAll(java.util.function.BiFunction<? super String, ? super V, ? extends V> function) {
-        throw new UnsupportedOperationException();
-    }
-
-    @Override
-    public V putIfAbsent(String key, V value) {
-        throw new UnsupportedOperationException();
-    }
-
-    @Override
-    public boolean remove(Object key, Object value) {
-        throw new UnsupportedOperationException();
-    }
-
-    @Override
-    public boolean replace(String key, V oldValue, V newValue) {
-        throw new UnsupportedOperationException();
-    }
-
-    @Override
-    public V replace(String key, V value) {
-        throw new UnsupportedOperationException();
-    }
-
-    @Override
-    public V computeIfAbsent(String key, java.util.function.Function<? super String, ? extends V> f) {
-        throw new UnsupportedOperationException();
-    }
-
-    @Override
-    public V computeIfPresent(String key, java.util.function.BiFunction<? super String, ? super V, ? extends V> f) {
-        throw new UnsupportedOperationException();
-    }
-
-    @Override
-    public V compute(String key, java.util.function.BiFunction<? super String, ? super V, ? extends V> f) {
-        throw new UnsupportedOperationException();
-    }
-
-    @Override
-    public V merge(String key, V value, java.util.function.BiFunction<? super V, ? super V, ? extends V> f) {
-        throw new UnsupportedOperationException();
     }
 }
