@@ -190,10 +190,6 @@ final class CircuitEquations {
         }
     }
 
-    private static int capacity(int entries) {
-        return (int) (entries / 0.75f) + 1;
-    }
-
     private void numberNodes() {
         int count = netlist.nodeCount();
         int[] parent = new int[count];

@@ -296,8 +296,7 @@ public final class SteadyStateSolver {
         for (int ci = 0; ci < count; ci++) {
             Component c = components.get(ci);
             PortResult[] ports = portResults[ci];
-            Map<String, PortResult> portMap = Frozen.of(ports.length == 0 ? NONE : PORT_KEYS[c.type().ordinal()],
-                    ports, ports.length);
+            Map<String, PortResult> portMap = Frozen.of(PORT_KEYS[c.type().ordinal()], ports, ports.length);
             comps.put(c.tag(), new ComponentResult(c.id(), c.tag(), c.type(), portMap, values(reports[ci])));
         }
         double pumpLoss = pumpInput - pumpHydraulic;
